@@ -1,0 +1,67 @@
+package org.resonancegate.maven;
+
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Include/exclude patterns against the semantics Maven documents for resource and fileset
+ * patterns ("**" matches zero or more directories; a trailing "/" means "/**"), checked by
+ * example rather than against our own regex.
+ */
+class GlobPatternTest {
+
+    @Test
+    void doubleStarSpansZeroOrMoreDirectories() {
+        GlobPattern p = GlobPattern.of("**/*.json");
+        assertTrue(p.matches("a.json"));
+        assertTrue(p.matches("pumps/a.json"));
+        assertTrue(p.matches("plant/pumps/a.json"));
+        assertFalse(p.matches("a.json5"));
+        assertFalse(p.matches("a.yaml"));
+    }
+
+    @Test
+    void singleStarAndQuestionMarkStayInOneDirectory() {
+        assertTrue(GlobPattern.of("*.json").matches("a.json"));
+        assertFalse(GlobPattern.of("*.json").matches("pumps/a.json"));
+        assertTrue(GlobPattern.of("p?.json").matches("p1.json"));
+        assertFalse(GlobPattern.of("p?.json").matches("p12.json"));
+        assertFalse(GlobPattern.of("p?.json").matches("p/.json"));
+    }
+
+    @Test
+    void prefixedAndTrailingSlashPatterns() {
+        assertTrue(GlobPattern.of("vibration/**/*.json").matches("vibration/a.json"));
+        assertTrue(GlobPattern.of("vibration/**/*.json").matches("vibration/x/y/a.json"));
+        assertFalse(GlobPattern.of("vibration/**/*.json").matches("proposed/a.json"));
+        assertTrue(GlobPattern.of("drafts/").matches("drafts/a.json"));
+        assertTrue(GlobPattern.of("drafts/").matches("drafts/old/a.json"));
+        assertFalse(GlobPattern.of("drafts/").matches("a.json"));
+        assertTrue(GlobPattern.of("./drafts\\*.json").matches("drafts/a.json"), "backslashes and ./ are normalised");
+    }
+
+    @Test
+    void regexCharactersAreLiteral() {
+        assertTrue(GlobPattern.of("p(1)+[a].json").matches("p(1)+[a].json"));
+        assertFalse(GlobPattern.of("p.json").matches("pxjson"));
+    }
+
+    @Test
+    void scannerSortsByRelativePathAndAppliesExcludes(@TempDir Path dir) throws IOException {
+        for (String f : List.of("b.json", "a/z.json", "a/b/c.json", "drafts/d.json", "notes.txt")) {
+            Path file = dir.resolve(f);
+            Files.createDirectories(file.getParent());
+            Files.writeString(file, "{}");
+        }
+        List<String> found = new SpecFileScanner(List.of("**/*.json"), List.of("drafts/**"))
+                .scan(dir).stream().map(p -> SpecFileScanner.relative(dir, p)).toList();
+        org.junit.jupiter.api.Assertions.assertEquals(List.of("a/b/c.json", "a/z.json", "b.json"), found);
+    }
+}
