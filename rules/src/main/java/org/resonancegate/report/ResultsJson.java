@@ -15,6 +15,7 @@ import tools.jackson.core.JsonGenerator;
 import tools.jackson.core.ObjectWriteContext;
 import tools.jackson.core.PrettyPrinter;
 import tools.jackson.core.SerializableString;
+import tools.jackson.core.StreamWriteFeature;
 import tools.jackson.core.io.CharacterEscapes;
 import tools.jackson.core.json.JsonFactory;
 
@@ -28,7 +29,7 @@ import tools.jackson.core.json.JsonFactory;
  *
  * <p>Numbers: a value with no fractional part (below 1e15) is written as an integer
  * ({@code 1480}, not {@code 1480.0}); others in the shortest form that reads back to the same
- * double. JSON has no NaN or infinity, so a non-finite value is written as {@code null}, which
+ * double, by the library's writer rather than the JDK's, so the digits are the same on every JDK. JSON has no NaN or infinity, so a non-finite value is written as {@code null}, which
  * a reader must treat as "not a number", never as zero.
  */
 public final class ResultsJson {
@@ -41,7 +42,11 @@ public final class ResultsJson {
 
     private static final CharacterEscapes ESCAPES = new HtmlSafeEscapes();
 
+    // The library's own shortest-form double writer, so the digits do not depend on the JDK's
+    // Double.toString (which changed in Java 19); duplicate detection guards our own key order.
     private static final JsonFactory FACTORY = JsonFactory.builder()
+            .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
+            .enable(StreamWriteFeature.STRICT_DUPLICATE_DETECTION)
             .highestNonEscapedChar(127)
             .characterEscapes(ESCAPES)
             .build();

@@ -151,6 +151,25 @@ class ResultsJsonTest {
     }
 
     @Test
+    void everyDoubleReadsBackExactly() {
+        // RFC 8259 numbers read by Jackson's parser must give back the same double bit for bit
+        java.util.Random random = new java.util.Random(7);
+        List<ModeResult> modes = new java.util.ArrayList<>();
+        for (int i = 0; i < 500; i++) {
+            double magnitude = Math.pow(10, random.nextInt(30) - 15);
+            modes.add(new ModeResult(i + 1, random.nextDouble() * magnitude, OptionalDouble.of(random.nextDouble())));
+        }
+        modes.add(new ModeResult(501, Double.MIN_VALUE, OptionalDouble.of(Double.MAX_VALUE)));
+        modes.add(new ModeResult(502, 1e15, OptionalDouble.of(-1e15 + 0.5)));
+        JsonNode written = READER.readTree(ResultsJson.toJson(new Results(List.of(new SpecResult("a.json",
+                Optional.empty(), SpecStatus.PASS, modes, List.of(), List.of()))))).get("specs").get(0).get("modes");
+        for (int i = 0; i < modes.size(); i++) {
+            assertEquals(modes.get(i).frequencyHz(), written.get(i).get("frequencyHz").asDouble(), 0.0, "mode " + i);
+            assertEquals(modes.get(i).dampingRatio().getAsDouble(), written.get(i).get("dampingRatio").asDouble(), 0.0);
+        }
+    }
+
+    @Test
     void escapesQuotesMarkupAndNonAscii() {
         String nasty = "say \"hi\" \\ </script><script>alert(1)</script> & 5 µm ≥ 2 \uD83D\uDE00\ttab\nline";
         CheckResult c = Fixtures.check("SEP", "separation", CheckStatus.FAIL, nasty, 9);
