@@ -170,4 +170,34 @@ class CheckMojoTest {
         mojo.execute();
         verify(mojo.getLog()).warn("resonance-gate: no file in src/vibration matches includes [*.yaml]; nothing to check");
     }
+
+    @Test
+    @Basedir("/unit/broken")
+    @InjectMojo(goal = "check", pom = "pom.xml")
+    void unreadableSpecFailsTheBuildWithItsDiagnostic(CheckMojo mojo) throws Exception {
+        MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
+        assertTrue(e.getMessage().startsWith("resonance-gate: 1 spec has errors"), e.getMessage());
+        List<String> errors = lines(mojo.getLog(), "error");
+        assertTrue(errors.stream().anyMatch(l -> l.startsWith("src/vibration/boiler-feed.json:7:5: IT-3 unknown key \"stifness\"")),
+                errors.toString());
+        assertEquals("error", results(basedir()).get("specs").get(0).get("status").asString());
+    }
+
+    @Test
+    @Basedir("/unit/waived")
+    @InjectMojo(goal = "check", pom = "pom.xml")
+    void waivedFailureIsAWarningAndPasses(CheckMojo mojo) throws Exception {
+        mojo.execute();
+        Log log = mojo.getLog();
+        verify(log, never()).error(any(CharSequence.class));
+        List<String> warnings = lines(log, "warn");
+        assertTrue(warnings.stream().anyMatch(l -> l.startsWith("src/vibration/tower-fan.json:9:5: IT-4 SEP separation: "
+                + "waived until 2999-12-31 (fan runs below 1400 rpm in service; accepted at design review 3): ")),
+                warnings.toString());
+        assertTrue(warnings.contains("1 spec: 0 pass, 1 waived, 0 fail, 0 error; 0 criteria failed, 1 waived"),
+                warnings.toString());
+        JsonNode spec = results(basedir()).get("specs").get(0);
+        assertEquals("waived", spec.get("status").asString());
+        assertTrue(spec.get("checks").get(0).get("waiver").get("valid").asBoolean());
+    }
 }
