@@ -177,15 +177,33 @@ final class JsonTreeReader {
         }
     }
 
-    /** Jackson's messages name the parser's input source; ours name the file through the location. */
-    private static String clean(String message) {
+    /**
+     * Jackson's messages name the parser's input source and its own feature switches; ours name
+     * the file through the location and say what JSON allows instead.
+     */
+    static String clean(String message) {
         if (message == null) {
             return "unreadable input";
         }
-        return message.replaceAll("\\s*\\(start marker at \\[[^\\]]*\\]\\)", "")
+        String m = message.replaceAll("\\s*\\(start marker at \\[[^\\]]*\\]\\)", "")
                 .replaceAll("\\[Source: [^;\\]]*;\\s*", "[")
                 .replace("\n", " ")
                 .strip();
+        if (m.contains("ALLOW_COMMENTS")) {
+            return m.replaceAll("\\s*\\(not recognized as one since Feature[^)]*\\)", "")
+                    + "; JSON has no comments, remove it";
+        }
+        if (m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
+            return m.replaceAll(":?\\s*enable `JsonReadFeature[^`]*` to allow", "")
+                    + "; JSON has no NaN or Infinity, write a finite number";
+        }
+        if (m.contains("ALLOW_")) {
+            m = m.replaceAll("\\s*\\([^)]*ALLOW_[^)]*\\)", "").replaceAll(":?\\s*enable `[^`]*` to allow", "");
+        }
+        if (m.startsWith("Unexpected end-of-input")) {
+            return m + "; the file ends before its closing brackets: check that every { and [ is closed";
+        }
+        return m + "; check for a missing or extra comma, quote or bracket here";
     }
 
     private SourceLocation at(TokenStreamLocation location) {
