@@ -38,14 +38,14 @@ final class JsonTreeReader {
 
     /**
      * Jackson's own constraints are a backstop, set looser than ours so that our clearer
-     * diagnostics come first (a string of 10,001 code points may be 20,002 UTF-16 chars).
+     * diagnostics come first: no string in a file within the size limit can reach Jackson's.
      */
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .streamReadConstraints(StreamReadConstraints.builder()
                     .maxNestingDepth(MAX_DEPTH + 8)
                     .maxDocumentLength(MAX_FILE_BYTES)
-                    .maxStringLength(4 * MAX_STRING_CODE_POINTS)
-                    .maxNameLength(4 * MAX_STRING_CODE_POINTS)
+                    .maxStringLength((int) MAX_FILE_BYTES)
+                    .maxNameLength((int) MAX_FILE_BYTES)
                     .maxNumberLength(400)
                     .maxTokenCount(MAX_FILE_BYTES)
                     .build())
@@ -80,11 +80,6 @@ final class JsonTreeReader {
      */
     static Result read(Path path, String file) {
         return new JsonTreeReader(file).readFile(path);
-    }
-
-    /** Reads JSON text directly (the bytes are already decoded). */
-    static Result readText(String text, String file) {
-        return new JsonTreeReader(file).parse(text);
     }
 
     private Result readFile(Path path) {
@@ -154,7 +149,13 @@ final class JsonTreeReader {
     private Result parse(String raw) {
         // A byte-order mark is accepted: some editors on some systems write one.
         String text = raw.startsWith("\uFEFF") ? raw.substring(1) : raw;
-        try (JsonParser parser = FACTORY.createParser(ObjectReadContext.empty(), text)) {
+        JsonParser parser;
+        try {
+            parser = FACTORY.createParser(ObjectReadContext.empty(), text);
+        } catch (JacksonException e) {
+            return failed(new SourceLocation(file, 1, 1), "cannot start reading JSON: " + clean(e.getOriginalMessage()));
+        }
+        try (parser) {
             JsonToken first = parser.nextToken();
             if (first == null) {
                 return failed(new SourceLocation(file, 1, 1),
@@ -171,7 +172,12 @@ final class JsonTreeReader {
         } catch (Abort a) {
             return failed(a.location, a.getMessage());
         } catch (StreamConstraintsException e) {
-            return failed(at(e.getLocation()), "the file exceeds a reading limit: " + clean(e.getOriginalMessage()));
+            // These carry no location of their own; the parser still knows where it stopped.
+            TokenStreamLocation where = e.getLocation() != null && e.getLocation() != TokenStreamLocation.NA
+                    ? e.getLocation() : parser.currentTokenLocation();
+            String message = e.getOriginalMessage() == null ? "" : e.getOriginalMessage()
+                    .replaceAll(",?\\s*from `[^`]*`", "").replace("()", "").strip();
+            return failed(at(where), "the file exceeds a reading limit: " + message);
         } catch (JacksonException e) {
             return failed(at(e.getLocation()), "invalid JSON: " + clean(e.getOriginalMessage()));
         }

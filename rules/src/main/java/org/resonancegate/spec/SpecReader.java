@@ -36,7 +36,10 @@ final class SpecReader {
         if (format.isPresent() && !format.get().equals(SPEC_FORMAT)) {
             problems.add(formatNode.get().location(), "unsupported format \"" + format.get() + "\"; this version reads \""
                     + SPEC_FORMAT + "\" (equipment specs) and \"" + PROFILE_FORMAT + "\" (criteria profiles)");
-            return new Outcome(Optional.empty(), Optional.empty(), Optional.empty());
+            // The id is still worth knowing (reports name the item), though nothing else is read.
+            Optional<JsonNode> idNode = root.get("id").filter(n -> n instanceof JsonNode.JsonString s && !s.value().isBlank());
+            return new Outcome(idNode.map(n -> ((JsonNode.JsonString) n).value()), idNode.map(JsonNode::location),
+                    Optional.empty());
         }
         Fields.checkKeys(root, "the spec", TOP_KEYS, problems);
 

@@ -50,6 +50,10 @@ public final class QuantityParser {
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" has no unit; " + article(what) + what
                     + " needs one, such as \"" + exampleFor(expected, number) + "\" (units: " + accepted + ")");
         }
+        if (unitText.matches(",\\d.*")) {
+            return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" uses a decimal comma; write the decimal"
+                    + " point as '.', such as \"" + number + "." + unitText.substring(1) + "\"");
+        }
         Optional<Unit> unit = UnitTable.find(unitText, expected);
         if (unit.isPresent()) {
             double si = value * unit.get().factor();

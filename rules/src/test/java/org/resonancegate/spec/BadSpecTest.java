@@ -198,6 +198,7 @@ class BadSpecTest {
     void unsupportedFormatNamesTheSupportedOnes() {
         edit("\"resonance-gate/1\"", "\"resonance-gate/2\"");
         expectOnly("\"resonance-gate/2\"", "unsupported format", "\"resonance-gate/1\"", "\"resonance-gate-profile/1\"");
+        assertEquals(java.util.Optional.of("CHW-P-02"), loaded.id());
     }
 
     // --- operation --------------------------------------------------------------------------

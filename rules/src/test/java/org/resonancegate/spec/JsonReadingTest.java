@@ -121,6 +121,18 @@ class JsonReadingTest {
         TestProject.assertOnlyDiagnostic(load(text), 6, 18, "1001 elements", "limit of 1000");
     }
 
+    /** Jackson's own read constraints stay in place as a backstop (here: the length of a number). */
+    @Test
+    void overlongNumberHitsTheParsersBackstop() {
+        String text = TestProject.VALID.replace("{\"ratio\": 0.05}", "{\"ratio\": 0." + "5".repeat(500) + "}");
+        SourceLocation at = TestProject.at("src/vibration/p.json", text, "0.555");
+        LoadedSpec loaded = load(text);
+        assertEquals(1, loaded.diagnostics().size(), TestProject.describe(loaded.diagnostics()));
+        Diagnostic d = loaded.diagnostics().get(0);
+        assertTrue(d.message().contains("exceeds a reading limit"), d.message());
+        assertEquals(at.line(), d.location().line());
+    }
+
     @Test
     void fileOver4MiBIsRefusedBeforeReading() {
         byte[] big = new byte[4 * 1024 * 1024 + 1];

@@ -149,6 +149,13 @@ class QuantityParserTest {
     }
 
     @Test
+    void decimalCommaIsExplained() {
+        String message = problem("2,4 MN/m", Dimension.STIFFNESS, "stiffness");
+        assertTrue(message.contains("decimal comma"), message);
+        assertTrue(message.contains("\"2.4 MN/m\""), message);
+    }
+
+    @Test
     void everyDimensionHasUnitsAndAName() {
         for (Dimension d : Dimension.values()) {
             assertTrue(!UnitTable.units(d).isEmpty(), d::name);
