@@ -26,7 +26,9 @@ public final class QuantityParser {
      *
      * @param key the key the text was written under, named in messages
      */
-    public static UnitParse parse(String text, Dimension expected, String key) {
+    public static UnitParse parse(String written, Dimension expected, String key) {
+        // The SI style puts a (narrow) no-break space between number and unit; editors paste those too.
+        String text = written.replace('\u00A0', ' ').replace('\u202F', ' ').replace('\u2009', ' ');
         String what = UnitTable.describe(expected);
         String accepted = UnitTable.acceptedSymbols(expected);
         String example = exampleFor(expected, "1");

@@ -31,7 +31,9 @@ public final class Suggestions {
         if (best == null) {
             return Optional.empty();
         }
-        int allowed = Math.max(2, Math.min(written.length(), best.length()) / 3 + 1);
+        // One- and two-letter words are only "close" when they differ in case: "x" is no typo of "t".
+        int longer = Math.max(written.length(), best.length());
+        int allowed = longer <= 2 ? 1 : Math.max(2, longer / 3 + 1);
         return bestDistance <= allowed ? Optional.of(best) : Optional.empty();
     }
 

@@ -149,6 +149,19 @@ class QuantityParserTest {
     }
 
     @Test
+    void noBreakSpacesBetweenNumberAndUnitAreAccepted() {
+        assertRelative(1850, si("1850\u00A0kg", Dimension.MASS));
+        assertRelative(1850, si("1850\u202Fkg", Dimension.MASS));
+        assertRelative(1850, si("1850kg", Dimension.MASS));
+    }
+
+    @Test
+    void noSuggestionForAnUnrelatedShortUnit() {
+        String message = problem("3 x", Dimension.MASS, "mass");
+        assertTrue(!message.contains("did you mean"), message);
+    }
+
+    @Test
     void decimalCommaIsExplained() {
         String message = problem("2,4 MN/m", Dimension.STIFFNESS, "stiffness");
         assertTrue(message.contains("decimal comma"), message);
