@@ -51,6 +51,7 @@ class QuantityParserTest {
         assertRelative(4.4482216152605, si("1 lbf", Dimension.FORCE));
         // lbf/in = 4.4482216152605 / 0.0254 = 175.126835... N/m
         assertRelative(0.45359237 * 9.80665 / 0.0254, si("1 lbf/in", Dimension.STIFFNESS));
+        // 175.1268 N/m per lbf/in: the usual handbook conversion figure (from memory).
         assertEquals(175.1268, si("1 lbf/in", Dimension.STIFFNESS), 1e-4);
     }
 
