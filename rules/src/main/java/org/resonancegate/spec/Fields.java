@@ -19,7 +19,7 @@ import org.resonancegate.units.UnitTable;
  */
 final class Fields {
 
-    private static final Pattern PERCENT = Pattern.compile("\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*%\\s*");
+    private static final Pattern PERCENT = Pattern.compile("\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)(\\s*)%\\s*");
 
     private Fields() {
     }
@@ -154,6 +154,11 @@ final class Fields {
         }
         if (node instanceof JsonNode.JsonString s) {
             Matcher m = PERCENT.matcher(s.value());
+            if (m.matches() && m.group(2).isEmpty()) {
+                problems.add(node.location(), "\"" + key + "\": write a space before the percent sign, such as \""
+                        + m.group(1) + " %\"; found \"" + s.value() + "\"");
+                return Optional.empty();
+            }
             if (m.matches()) {
                 double percent = Double.parseDouble(m.group(1));
                 if (!Double.isFinite(percent)) {

@@ -14,7 +14,7 @@ import java.util.stream.Collectors;
 public final class QuantityParser {
 
     private static final Pattern NUMBER_AND_UNIT =
-            Pattern.compile("\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*?)\\s*");
+            Pattern.compile("\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)(\\s*)(.*?)\\s*");
     private static final Pattern NON_FINITE =
             Pattern.compile("\\s*[+-]?(?:nan|inf|infinity|∞)\\b.*", Pattern.CASE_INSENSITIVE);
 
@@ -42,7 +42,7 @@ public final class QuantityParser {
                     + what + " as \"<number> <unit>\", such as \"" + example + "\" (units: " + accepted + ")");
         }
         String number = m.group(1);
-        String unitText = m.group(2);
+        String unitText = m.group(3);
         double value = Double.parseDouble(number);
         if (Double.isInfinite(value)) {
             return new UnitParse.Problem("\"" + key + "\": the number " + number
@@ -55,6 +55,12 @@ public final class QuantityParser {
         if (unitText.matches(",\\d.*")) {
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" uses a decimal comma; write the decimal"
                     + " point as '.', such as \"" + number + "." + unitText.substring(1) + "\"");
+        }
+        if (m.group(2).isEmpty()) {
+            // The format writes number, space, unit; a file that runs them together would read
+            // differently elsewhere (and "5e3" against "5 e3" shows why the space matters).
+            return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" needs a space between the number and"
+                    + " the unit, such as \"" + number + " " + unitText + "\"");
         }
         Optional<Unit> unit = UnitTable.find(unitText, expected);
         if (unit.isPresent()) {

@@ -173,6 +173,12 @@ class BadSpecTest {
     }
 
     @Test
+    void percentageNeedsASpaceBeforeTheSign() {
+        edit("\"margin\": \"20 %\"", "\"margin\": \"20%\"");
+        expectOnly("\"20%\"", "space before the percent sign", "\"20 %\"");
+    }
+
+    @Test
     void dimensionlessStringNeedsAPercentSign() {
         edit("{\"ratio\": 0.05}", "{\"ratio\": \"0.05\"}");
         expectOnly("\"0.05\"", "dimensionless", "a number or a percentage");

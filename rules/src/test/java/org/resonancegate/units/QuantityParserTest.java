@@ -153,7 +153,14 @@ class QuantityParserTest {
     void noBreakSpacesBetweenNumberAndUnitAreAccepted() {
         assertRelative(1850, si("1850\u00A0kg", Dimension.MASS));
         assertRelative(1850, si("1850\u202Fkg", Dimension.MASS));
-        assertRelative(1850, si("1850kg", Dimension.MASS));
+    }
+
+    /** The format writes number, space, unit (spec-format.md, "Quantities"). */
+    @Test
+    void numberAndUnitRunTogetherAreRefusedWithTheFix() {
+        String message = problem("1850kg", Dimension.MASS, "mass");
+        assertTrue(message.contains("needs a space"), message);
+        assertTrue(message.contains("\"1850 kg\""), message);
     }
 
     @Test
