@@ -109,8 +109,9 @@ final class Fields {
     /** A {@code "<number> <unit>"} string of the expected dimension. */
     static Optional<Quantity> quantity(JsonNode node, String key, Dimension dimension, Problems problems) {
         if (node instanceof JsonNode.JsonNumber n) {
-            problems.add(node.location(), "\"" + key + "\": the bare number " + n.text() + " has no unit; write "
-                    + UnitTable.describe(dimension) + " as a string with its unit, such as \""
+            problems.add(node.location(), "\"" + key + "\": the bare number " + n.text() + " has no unit; "
+                    + QuantityParser.article(UnitTable.describe(dimension)) + UnitTable.describe(dimension)
+                    + " is written as a string with its unit, such as \""
                     + QuantityParser.exampleFor(dimension, n.text()) + "\" (units: "
                     + UnitTable.acceptedSymbols(dimension) + ")");
             return Optional.empty();

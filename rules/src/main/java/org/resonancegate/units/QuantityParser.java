@@ -88,7 +88,7 @@ public final class QuantityParser {
     }
 
     /** "a " or "an ", by the first letter of the word that follows. */
-    static String article(String word) {
+    public static String article(String word) {
         return "aeiou".indexOf(Character.toLowerCase(word.charAt(0))) >= 0 ? "an " : "a ";
     }
 

@@ -38,6 +38,8 @@ public final class UnitTable {
     private static final Map<Dimension, List<Unit>> BY_DIMENSION = new EnumMap<>(Dimension.class);
     /** Normalised spelling → every unit with that spelling ({@code rad/s} serves three dimensions). */
     private static final Map<String, List<Unit>> BY_SPELLING = new LinkedHashMap<>();
+    /** Other spellings worth naming in messages ("um", "r/min"), not mere variants of "·" or "²". */
+    private static final Map<Unit, List<String>> SHOWN_ALIASES = new LinkedHashMap<>();
 
     static {
         add(Dimension.MASS, "kg", 1);
@@ -109,6 +111,9 @@ public final class UnitTable {
         BY_DIMENSION.computeIfAbsent(dimension, d -> new ArrayList<>()).add(unit);
         BY_SPELLING.computeIfAbsent(normalise(symbol), s -> new ArrayList<>()).add(unit);
         for (String alias : aliases) {
+            if (!normalise(alias).equals(normalise(symbol))) {
+                SHOWN_ALIASES.computeIfAbsent(unit, u -> new ArrayList<>()).add(alias);
+            }
             List<Unit> units = BY_SPELLING.computeIfAbsent(normalise(alias), s -> new ArrayList<>());
             if (!units.contains(unit)) {
                 units.add(unit);
@@ -152,7 +157,8 @@ public final class UnitTable {
     public static String acceptedSymbols(Dimension dimension) {
         List<String> symbols = new ArrayList<>();
         for (Unit u : BY_DIMENSION.get(dimension)) {
-            symbols.add(u.symbol());
+            List<String> also = SHOWN_ALIASES.getOrDefault(u, List.of());
+            symbols.add(also.isEmpty() ? u.symbol() : u.symbol() + " (or " + String.join(", ", also) + ")");
         }
         return String.join(", ", symbols);
     }
