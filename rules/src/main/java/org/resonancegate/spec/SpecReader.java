@@ -48,7 +48,7 @@ final class SpecReader {
         Optional<SourceLocation> idLocation = id.isPresent() ? idNode.map(JsonNode::location) : Optional.empty();
         Optional<String> title = root.get("title").flatMap(n -> Fields.string(n, "title", "\"Chilled water pump 2\"", problems));
         Optional<String> revision = root.get("revision").flatMap(n -> Fields.string(n, "revision", "\"C\"", problems));
-        root.get("$schema").ifPresent(n -> Fields.string(n, "$schema", "\"https://example.invalid/spec.schema.json\"", problems));
+        // "$schema" is for editors; the format says the engine ignores its value, whatever its type.
 
         Optional<Model> model = Fields.required(root, "model", "the spec",
                         "\"model\": {\"kind\": \"single\", \"mass\": \"1850 kg\", ...}", problems)

@@ -86,13 +86,9 @@ class JsonReadingTest {
     /** The format's limit: nesting deeper than 32, the top-level object being level 1. */
     @Test
     void nestingDeeperThan32IsRefusedAt32Accepted() {
-        // "$schema" holds 31 nested lists: levels 2..32. Allowed by the reader (the schema key
-        // then complains about the type, which shows the reader got through).
+        // "$schema" (whose value the engine ignores) holds 31 nested lists: levels 2..32, accepted.
         String ok = TestProject.VALID.replace("\"format\"", "\"$schema\": " + "[".repeat(31) + "]".repeat(31) + ",\n  \"format\"");
-        LoadedSpec accepted = load(ok);
-        assertTrue(accepted.diagnostics().stream().noneMatch(d -> d.message().contains("nesting")),
-                TestProject.describe(accepted.diagnostics()));
-        TestProject.assertOnlyDiagnostic(accepted, 2, 14, "\"$schema\" must be a string");
+        TestProject.spec(load(ok));
 
         String deep = TestProject.VALID.replace("\"format\"", "\"$schema\": " + "[".repeat(32) + "]".repeat(32) + ",\n  \"format\"");
         // The 32nd list (level 33) opens at column 14 + 31.

@@ -157,6 +157,43 @@ class ProfileTest {
     }
 
     @Test
+    void aSymbolicLinkStayingInsideTheProjectIsFollowed() throws IOException {
+        Path target = project.write("shared/pumps.json", profile(VEL_45));
+        Files.createDirectories(base.resolve("src/profiles"));
+        try {
+            Files.createSymbolicLink(base.resolve("src/profiles/linked.json"), target);
+        } catch (UnsupportedOperationException | IOException e) {
+            assumeTrue(false, "symbolic links not available here");
+        }
+        project.write(SPEC_FILE, spec(SEP_20, "../profiles/linked.json"));
+        Spec spec = TestProject.spec(loadSpec());
+        assertEquals(List.of("SEP", "VEL"), ids(spec));
+        // Locations name the file the link resolves to.
+        assertEquals("shared/pumps.json", spec.criteria().get(1).location().file());
+    }
+
+    @Test
+    void anAbsoluteProfilePathIsRefused() {
+        Path target = project.write("src/profiles/pumps.json", profile(VEL_45));
+        String written = target.toAbsolutePath().toString().replace('\\', '/');
+        String text = spec(SEP_20, written);
+        project.write(SPEC_FILE, text);
+        SourceLocation entry = TestProject.at(SPEC_FILE, text, "\"" + written + "\"");
+        TestProject.assertOnlyDiagnostic(loadSpec(), entry.line(), entry.column(), "must be a path relative to this file");
+    }
+
+    @Test
+    void anUnsupportedProfileFormatIsRefused() {
+        String pumps = profile(VEL_45).replace("resonance-gate-profile/1", "resonance-gate-profile/9");
+        project.write("src/profiles/pumps.json", pumps);
+        project.write(SPEC_FILE, spec(SEP_20, "../profiles/pumps.json"));
+        LoadedSpec loaded = loadSpec();
+        TestProject.assertOnlyDiagnostic(loaded, 2, 13, "unsupported profile format \"resonance-gate-profile/9\"",
+                "\"resonance-gate-profile/1\"");
+        assertEquals("src/profiles/pumps.json", loaded.diagnostics().get(0).location().file());
+    }
+
+    @Test
     void aMissingProfileIsADiagnostic() {
         String text = spec(SEP_20, "../profiles/nope.json");
         project.write(SPEC_FILE, text);
