@@ -3,7 +3,6 @@ package org.resonancegate.spec;
 import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.CharBuffer;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CharsetDecoder;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
@@ -60,6 +59,7 @@ final class JsonTreeReader {
 
     /** Stops the walk at a problem after which the rest of the file cannot be trusted. */
     private static final class Abort extends RuntimeException {
+        private static final long serialVersionUID = 1L;
         private final transient SourceLocation location;
 
         Abort(SourceLocation location, String message) {
@@ -231,7 +231,7 @@ final class JsonTreeReader {
                 yield new JsonNode.JsonString(s, location);
             }
             case VALUE_NUMBER_INT, VALUE_NUMBER_FLOAT ->
-                    new JsonNode.JsonNumber(parser.getDoubleValue(), parser.getText(), location);
+                    new JsonNode.JsonNumber(parser.getDoubleValue(), parser.getString(), location);
             case VALUE_TRUE -> new JsonNode.JsonBoolean(true, location);
             case VALUE_FALSE -> new JsonNode.JsonBoolean(false, location);
             case VALUE_NULL -> new JsonNode.JsonNull(location);
