@@ -233,13 +233,4 @@ final class Fields {
         }
         return Optional.of(found.get(0));
     }
-
-    /** At most one of {@code keys}. */
-    static Optional<JsonNode.Member> atMostOne(JsonNode.JsonObject object, List<String> keys, String where,
-                                              Problems problems) {
-        if (present(object, keys).isEmpty()) {
-            return Optional.empty();
-        }
-        return exactlyOne(object, keys, where, problems);
-    }
 }
