@@ -191,6 +191,14 @@ class ValidSpecTest {
     }
 
     @Test
+    void windowsLineEndingsCountAsOneLineBreak() {
+        TestProject project = new TestProject(base);
+        Spec spec = TestProject.spec(project.loadOne("crlf.json", TestProject.VALID.replace("\n", "\r\n")));
+        assertEquals(TestProject.at("crlf.json", TestProject.VALID, "\"1850 kg\""),
+                ((Model.Single) spec.model()).mass().location());
+    }
+
+    @Test
     void byteOrderMarkIsAccepted() {
         TestProject project = new TestProject(base);
         byte[] text = TestProject.VALID.getBytes(java.nio.charset.StandardCharsets.UTF_8);
