@@ -91,10 +91,9 @@ final class SeparationRule {
                 ? " " + Display.speedAndFrequency(a.speed().getAsDouble(), a.omega())
                 : " at " + Display.hz(a.omega());
         String verdict = fails
-                ? "inside the " + Display.percent(margin) + " margin by " + Display.percent(margin - a.value())
-                + " (frequency ratio)"
-                : "outside the " + Display.percent(margin) + " margin by " + Display.percent(a.value() - margin)
-                + " (frequency ratio)";
+                ? "inside the " + Display.percent(margin) + " margin by "
+                + Display.sig((margin - a.value()) * 100, 3) + " percentage points"
+                : "outside the " + Display.percent(margin) + " margin";
         return source + at + " is " + Display.percent(a.value()) + " from " + mode + ", " + verdict;
     }
 

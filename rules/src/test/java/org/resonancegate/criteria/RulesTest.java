@@ -70,6 +70,8 @@ class RulesTest {
         assertRel(10 / PUMP_FN - 1, f.value(), 1e-12);
         assertEquals(600, f.speedRpm().getAsDouble(), 1e-9);
         assertFalse(f.fails());
+        assertTrue(f.message().contains("at 600 rpm (10 Hz) is 74.4 % from mode 1 at 5.732 Hz, outside the 20 % margin"),
+                f.message());
     }
 
     @Test
@@ -81,6 +83,8 @@ class RulesTest {
         assertTrue(f.speedRpm().isEmpty(), "a fixed frequency does not depend on speed");
         assertEquals(6, f.frequencyHz().getAsDouble(), 1e-12);
         assertTrue(f.fails());
+        assertTrue(f.message().contains("'compressor' at 6 Hz is 4.67 % from mode 1"), f.message());
+        assertTrue(f.message().contains("inside the 10 % margin by 5.33 percentage points"), f.message());
         // An order-only excitation alone still counts: order 0.5 from 750 rpm starts at 6.25 Hz.
         Finding g = judge(separation("SEP", 0.1), PUMP_SET, range(750, 1500), List.of(orderOnly("belt", 0.5)));
         assertRel(6.25 / PUMP_FN - 1, g.value(), 1e-12);
