@@ -1,11 +1,14 @@
 package org.resonancegate.criteria;
 
-import java.util.List;
 import java.util.OptionalDouble;
+import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
+import org.resonancegate.dynamics.Drives;
 import org.resonancegate.dynamics.Load;
 import org.resonancegate.dynamics.Response;
 import org.resonancegate.spec.Criterion;
+import org.resonancegate.spec.Excitation;
+import org.resonancegate.spec.ExcitationFrequency;
 
 /**
  * isolation: for each force, unbalance or base-motion excitation alone, the transmissibility T
@@ -18,34 +21,28 @@ final class IsolationRule {
     private IsolationRule() {
     }
 
-    static double transmissibility(Drive d, Response r) {
-        double applied = d.load().amplitude().abs();
+    /**
+     * T of one excitation at its frequency. The system is linear, so T is taken from a unit load
+     * of the same kind: an unbalance at standstill (zero force) still has its limit T = 1 instead
+     * of 0/0. A rigid body will need the peak of the ground-force vector over a cycle here.
+     */
+    static double transmissibility(Drive d, RuleContext ctx) {
         if (d.load() instanceof Load.Force) {
+            Response r = ctx.system().respond(new Load.Force(Complex.ONE), d.omega());
             double worst = 0;
-            for (var g : r.groundForces()) {
+            for (Complex g : r.groundForces()) {
                 worst = Math.max(worst, g.abs());
             }
-            return worst / applied;
+            return worst;
         }
         // Base motion: the response point (the mass) along the motion's direction.
-        return r.displacements().get(0).abs() / applied;
+        return ctx.system().respond(new Load.GroundMotion(Complex.ONE), d.omega()).displacements().get(0).abs();
     }
 
-    /** The largest T over all loaded excitations at one speed, and the index of the first that reaches it. */
-    private static double[] worstAt(RuleContext ctx, double speed) {
-        List<Drive> drives = ctx.drivesAt(speed);
-        double worst = Double.NEGATIVE_INFINITY;
-        int which = -1;
-        for (int i = 0; i < drives.size(); i++) {
-            Drive d = drives.get(i);
-            double t = CriterionProblem.requireFinite(transmissibility(d, ctx.system().respond(d.load(), d.omega())),
-                    "transmissibility of '" + d.source().name() + "'");
-            if (which < 0 || (t > worst && !Ties.same(t, worst))) {
-                worst = t;
-                which = i;
-            }
-        }
-        return new double[] {worst, which};
+    /** T of one excitation at running speed {@code speed}. */
+    private static double transmissibilityAt(Excitation e, RuleContext ctx, double speed) {
+        Drive d = Drives.at(e, speed, ctx.operation()).orElseThrow();
+        return CriterionProblem.requireFinite(transmissibility(d, ctx), "transmissibility of '" + e.name() + "'");
     }
 
     static Finding evaluate(Criterion.Isolation c, RuleContext ctx) {
@@ -53,11 +50,25 @@ final class IsolationRule {
             throw new CriterionProblem("isolation needs a force, unbalance or base-motion excitation; "
                     + "the spec lists only order-only ones. Add one, or remove the criterion");
         }
-        SpeedSweep.Peak peak = ctx.fixedSpeed()
-                ? new SpeedSweep.Peak(ctx.minSpeed(), worstAt(ctx, ctx.minSpeed())[0])
-                : SpeedSweep.maximise(s -> worstAt(ctx, s)[0], ctx.minSpeed(), ctx.maxSpeed(),
-                ctx.specialSpeeds(), "transmissibility");
-        Drive governing = ctx.drivesAt(peak.speed()).get((int) worstAt(ctx, peak.speed())[1]);
+        // Each excitation alone, each over the whole speed range; the worst counts, the first
+        // listed among equals.
+        SpeedSweep.Peak peak = null;
+        Excitation worst = null;
+        for (Excitation e : ctx.excitations()) {
+            if (e instanceof Excitation.OrderOnly) {
+                continue;
+            }
+            boolean follows = e.frequency() instanceof ExcitationFrequency.Order;
+            SpeedSweep.Peak p = ctx.fixedSpeed() || !follows
+                    ? new SpeedSweep.Peak(ctx.minSpeed(), transmissibilityAt(e, ctx, ctx.minSpeed()))
+                    : SpeedSweep.maximise(s -> transmissibilityAt(e, ctx, s), ctx.minSpeed(), ctx.maxSpeed(),
+                    ctx.specialSpeeds(), "transmissibility of '" + e.name() + "'");
+            if (peak == null || (p.value() > peak.value() && !Ties.same(p.value(), peak.value()))) {
+                peak = p;
+                worst = e;
+            }
+        }
+        Drive governing = Drives.at(worst, peak.speed(), ctx.operation()).orElseThrow();
         double t = peak.value();
         OptionalDouble speedRpm = ctx.fixedSpeed() || governing.speedDependent()
                 ? OptionalDouble.of(peak.speed() * 60 / (2 * Math.PI)) : OptionalDouble.empty();

@@ -149,6 +149,26 @@ class RulesTest {
         assertEquals(1200, g.speedRpm().getAsDouble(), 1e-6);
     }
 
+    // 1.5: T → 1 as β → 0; an unbalance at standstill carries no force, yet T is defined.
+    @Test
+    void isolationFromStandstill() {
+        Finding f = judge(maxTransmissibility("ISO", 20), tenHertz(0.05), range(0, 300),
+                List.of(unbalance("fan", 1, 300)));
+        // Over 0–300 rpm (β ≤ 0.5) the worst is at the top: T(0.5, 0.05) = 1.332042 (§1 table).
+        assertEquals(1.332042, f.value(), 5.1e-7);
+        assertEquals(300, f.speedRpm().getAsDouble(), 1e-6);
+    }
+
+    // §1 table: D_max = 10.012523 at β = 0.997497 for ζ = 0.05 (computed with SciPy; a regression value).
+    @Test
+    void displacementPeakAtFivePercentDamping() {
+        double k = 1000 * Math.pow(TWO_PI * 10, 2);
+        Finding f = judge(displacement("DISP", 1, Criterion.DisplacementMeasure.PEAK), tenHertz(0.05), range(300, 1200),
+                List.of(force("drive", order(1), 1000, 0)));
+        assertEquals(10.012523, f.value() * k / 1000, 5.1e-7);
+        assertRel(600 * 0.997497, f.speedRpm().getAsDouble(), 2e-6);
+    }
+
     @Test
     void isolationWithOnlyOrderLinesCannotBeJudged() {
         assertThrows(CriterionProblem.class, () -> judge(maxTransmissibility("ISO", 0.5), tenHertz(0.05),
