@@ -23,7 +23,7 @@ final class WaiverJudgement {
 
     static Verdict judge(String criterionId, Severity severity, boolean fails, List<Waiver> waivers,
                          LocalDate today) {
-        Optional<Waiver> waiver = pick(criterionId, waivers, today);
+        Optional<Waiver> waiver = pick(criterionId, waivers);
         Optional<CheckResult.WaiverNote> note = waiver.map(w ->
                 new CheckResult.WaiverNote(w.reason(), w.expires(), valid(w, today), w.location()));
         if (!fails) {
@@ -42,8 +42,11 @@ final class WaiverJudgement {
         return !w.expires().isBefore(today);
     }
 
-    /** The waiver naming this criterion: a valid one if any (the latest-expiring), else the latest expired. */
-    private static Optional<Waiver> pick(String criterionId, List<Waiver> waivers, LocalDate today) {
+    /**
+     * The waiver naming this criterion; with several, the latest-expiring (which is valid if any
+     * of them is), the first listed among equal dates.
+     */
+    private static Optional<Waiver> pick(String criterionId, List<Waiver> waivers) {
         Waiver best = null;
         for (Waiver w : waivers) {
             if (!w.criterion().equals(criterionId)) {

@@ -3,7 +3,6 @@ package org.resonancegate.criteria;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
-import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.resonancegate.spec.Quantity;
@@ -75,17 +74,5 @@ final class Display {
         String format(double si) {
             return sig(si / factor) + " " + unit;
         }
-    }
-
-    static String join(String first, Object... rest) {
-        StringBuilder b = new StringBuilder(first);
-        for (Object o : rest) {
-            b.append(o);
-        }
-        return b.toString();
-    }
-
-    static String lower(String s) {
-        return s.toLowerCase(Locale.ROOT);
     }
 }
