@@ -26,8 +26,13 @@ public sealed interface Criterion {
     }
 
     /** Transmissibility at or below a limit, stated as a maximum T or a minimum efficiency 1 − T. */
-    record Isolation(String id, Severity severity, IsolationLimit limit, SourceLocation location)
-            implements Criterion {
+    record Isolation(String id, Severity severity, IsolationLimit limit, Optional<ResponsePoint> at,
+                     SourceLocation location) implements Criterion {
+
+        public Isolation(String id, Severity severity, IsolationLimit limit, SourceLocation location) {
+            this(id, severity, limit, Optional.empty(), location);
+        }
+
         @Override
         public Rule rule() {
             return Rule.ISOLATION;
@@ -36,7 +41,13 @@ public sealed interface Criterion {
 
     /** Response displacement at or below {@code max} (m), as peak or peak-to-peak. */
     record Displacement(String id, Severity severity, Quantity max, DisplacementMeasure measure,
-                        SourceLocation location) implements Criterion {
+                        Optional<ResponsePoint> at, SourceLocation location) implements Criterion {
+
+        public Displacement(String id, Severity severity, Quantity max, DisplacementMeasure measure,
+                            SourceLocation location) {
+            this(id, severity, max, measure, Optional.empty(), location);
+        }
+
         @Override
         public Rule rule() {
             return Rule.DISPLACEMENT;
@@ -45,7 +56,13 @@ public sealed interface Criterion {
 
     /** Response velocity at or below {@code max} (m/s), as rms or peak. */
     record Velocity(String id, Severity severity, Quantity max, VelocityMeasure measure,
-                    SourceLocation location) implements Criterion {
+                    Optional<ResponsePoint> at, SourceLocation location) implements Criterion {
+
+        public Velocity(String id, Severity severity, Quantity max, VelocityMeasure measure,
+                        SourceLocation location) {
+            this(id, severity, max, measure, Optional.empty(), location);
+        }
+
         @Override
         public Rule rule() {
             return Rule.VELOCITY;
@@ -53,8 +70,13 @@ public sealed interface Criterion {
     }
 
     /** Dynamic force through the spring at or below {@code max} (N). */
-    record TransmittedForce(String id, Severity severity, Quantity max, SourceLocation location)
-            implements Criterion {
+    record TransmittedForce(String id, Severity severity, Quantity max, Optional<Axis> axis,
+                            SourceLocation location) implements Criterion {
+
+        public TransmittedForce(String id, Severity severity, Quantity max, SourceLocation location) {
+            this(id, severity, max, Optional.empty(), location);
+        }
+
         @Override
         public Rule rule() {
             return Rule.TRANSMITTED_FORCE;

@@ -1,0 +1,51 @@
+package org.resonancegate.check;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import org.resonancegate.report.ErrorEntry;
+import org.resonancegate.report.Results;
+import org.resonancegate.report.SpecResult;
+import org.resonancegate.report.SpecStatus;
+import org.resonancegate.spec.Diagnostic;
+import org.resonancegate.spec.LoadedSpec;
+import org.resonancegate.spec.SourceLocation;
+
+/**
+ * The whole run over a set of files, with the reader passed in: a spec with diagnostics is
+ * reported as an error with no modes or checks; one broken spec never hides the others.
+ */
+public final class CheckRunner {
+
+    private CheckRunner() {
+    }
+
+    public static Results run(CheckRequest request, SpecSource source) {
+        LocalDate today = LocalDate.now(request.clock());
+        List<SpecResult> results = new ArrayList<>();
+        for (LoadedSpec loaded : source.load(request.projectBase(), request.specFiles())) {
+            results.add(evaluate(loaded, today));
+        }
+        results.sort(Comparator.comparing(SpecResult::file));
+        return new Results(results);
+    }
+
+    static SpecResult evaluate(LoadedSpec loaded, LocalDate today) {
+        if (!loaded.diagnostics().isEmpty() || loaded.spec().isEmpty()) {
+            List<ErrorEntry> errors = new ArrayList<>();
+            for (Diagnostic d : loaded.diagnostics()) {
+                errors.add(new ErrorEntry(d.location(), d.message()));
+            }
+            return new SpecResult(loaded.file(), loaded.id(), SpecStatus.ERROR, List.of(), List.of(), errors);
+        }
+        try {
+            return SpecEvaluator.evaluate(loaded.spec().get(), today);
+        } catch (RuntimeException e) {
+            // A defect in the engine must not turn into a pass or hide the other specs.
+            return new SpecResult(loaded.file(), loaded.id(), SpecStatus.ERROR, List.of(), List.of(),
+                    List.of(new ErrorEntry(new SourceLocation(loaded.file(), 1, 1),
+                            "internal error while evaluating this spec: " + e)));
+        }
+    }
+}

@@ -1,0 +1,78 @@
+package org.resonancegate.criteria;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.resonancegate.spec.Quantity;
+
+/** Number formatting for messages: deterministic, locale-independent, a few significant digits. */
+final class Display {
+
+    private static final Pattern NUMBER_THEN_UNIT =
+            Pattern.compile("^\\s*([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
+
+    private Display() {
+    }
+
+    /** {@code x} rounded to {@code digits} significant digits, without trailing zeros. */
+    static String sig(double x, int digits) {
+        if (!Double.isFinite(x)) {
+            return Double.toString(x);
+        }
+        if (x == 0) {
+            return "0";
+        }
+        BigDecimal rounded = new BigDecimal(x).round(new MathContext(digits, RoundingMode.HALF_EVEN));
+        String text = rounded.stripTrailingZeros().toPlainString();
+        return text.equals("-0") ? "0" : text;
+    }
+
+    static String sig(double x) {
+        return sig(x, 4);
+    }
+
+    /** A running speed (rad/s) in rpm. */
+    static String rpm(double speed) {
+        return sig(speed * 60 / (2 * Math.PI)) + " rpm";
+    }
+
+    /** An angular frequency (rad/s) in Hz. */
+    static String hz(double omega) {
+        return sig(omega / (2 * Math.PI)) + " Hz";
+    }
+
+    /** A fraction as a percentage: 0.153 → "15.3 %". */
+    static String percent(double fraction) {
+        return sig(fraction * 100, 3) + " %";
+    }
+
+    static String speedAndFrequency(double speed, double omega) {
+        return "at " + rpm(speed) + " (" + hz(omega) + ")";
+    }
+
+    /**
+     * The unit a limit was written in, recovered from its text ("4.5 mm/s" with si 0.0045 gives
+     * mm/s with factor 0.001), so a value can be shown the way the user thinks of it. Falls back to
+     * SI when the text cannot be read that way.
+     */
+    record UserUnit(double factor, String unit) {
+
+        static UserUnit of(Quantity q, String siUnit) {
+            Matcher m = NUMBER_THEN_UNIT.matcher(q.text());
+            if (m.matches() && !m.group(2).isEmpty()) {
+                double written = Double.parseDouble(m.group(1));
+                double factor = q.si() / written;
+                if (written != 0 && Double.isFinite(factor) && factor > 0) {
+                    return new UserUnit(factor, m.group(2));
+                }
+            }
+            return new UserUnit(1, siUnit);
+        }
+
+        String format(double si) {
+            return sig(si / factor) + " " + unit;
+        }
+    }
+}

@@ -1,0 +1,109 @@
+package org.resonancegate.criteria;
+
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.List;
+import java.util.TreeSet;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
+import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
+
+/**
+ * Finds the largest value of a function of running speed over a closed range. A grid alone lets
+ * a lightly damped peak slip between points, so the candidates are the range ends, the caller's
+ * special speeds (resonances and analytic peaks) and a uniform grid; then every local maximum of
+ * those samples is refined by Brent's method inside the bracket of its two neighbours.
+ */
+public final class SpeedSweep {
+
+    /** Uniform grid points across the range, besides the special speeds. */
+    public static final int GRID_POINTS = 401;
+
+    /** The worst speed and the value there. */
+    public record Peak(double speed, double value) {
+    }
+
+    private SpeedSweep() {
+    }
+
+    /**
+     * The maximum of {@code f} over [lo, hi]; ties (within a relative 1e-9) go to the lower speed.
+     * Every sample must be finite, otherwise a {@link CriterionProblem} names the speed.
+     */
+    public static Peak maximise(DoubleUnaryOperator f, double lo, double hi, Collection<Double> specialSpeeds,
+                                String what) {
+        DoubleUnaryOperator checked = s -> CriterionProblem.requireFinite(f.applyAsDouble(s),
+                what + " at " + Display.rpm(s));
+        if (!(hi > lo)) {
+            return new Peak(lo, checked.applyAsDouble(lo));
+        }
+        TreeSet<Double> speeds = new TreeSet<>();
+        for (int i = 0; i < GRID_POINTS; i++) {
+            speeds.add(lo + (hi - lo) * i / (GRID_POINTS - 1));
+        }
+        speeds.add(lo);
+        speeds.add(hi);
+        for (double s : specialSpeeds) {
+            if (s >= lo && s <= hi) {
+                speeds.add(s);
+            }
+        }
+        double[] x = speeds.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] y = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            y[i] = checked.applyAsDouble(x[i]);
+        }
+        Peak best = new Peak(x[0], y[0]);
+        for (int i = 0; i < x.length; i++) {
+            best = better(best, new Peak(x[i], y[i]));
+        }
+        for (int i : localMaxima(y)) {
+            double a = x[Math.max(0, i - 1)];
+            double b = x[Math.min(x.length - 1, i + 1)];
+            best = better(best, refine(checked, a, b, x[i]));
+        }
+        return best;
+    }
+
+    /** Samples not lower than their neighbours, leaving out flat stretches (nothing to refine there). */
+    static List<Integer> localMaxima(double[] y) {
+        List<Integer> out = new ArrayList<>();
+        for (int i = 0; i < y.length; i++) {
+            boolean leftOk = i == 0 || y[i] >= y[i - 1];
+            boolean rightOk = i == y.length - 1 || y[i] >= y[i + 1];
+            boolean flat = (i == 0 || y[i] == y[i - 1]) && (i == y.length - 1 || y[i] == y[i + 1]);
+            if (leftOk && rightOk && !flat) {
+                out.add(i);
+            }
+        }
+        return out;
+    }
+
+    private static Peak refine(DoubleUnaryOperator f, double a, double b, double start) {
+        if (!(b > a)) {
+            return new Peak(start, f.applyAsDouble(start));
+        }
+        BrentOptimizer brent = new BrentOptimizer(1e-12, 1e-14 * Math.max(Math.abs(a), Math.abs(b)));
+        try {
+            UnivariatePointValuePair p = brent.optimize(new MaxEval(500),
+                    new UnivariateObjectiveFunction(f::applyAsDouble), GoalType.MAXIMIZE,
+                    new SearchInterval(a, b, start));
+            return new Peak(p.getPoint(), p.getValue());
+        } catch (TooManyEvaluationsException e) {
+            // Brent did not settle: the grid sample stands, which is still a lower bound checked below.
+            return new Peak(start, f.applyAsDouble(start));
+        }
+    }
+
+    private static Peak better(Peak current, Peak candidate) {
+        if (Ties.same(candidate.value(), current.value())) {
+            return candidate.speed() < current.speed() ? candidate : current;
+        }
+        return candidate.value() > current.value() ? candidate : current;
+    }
+}

@@ -1,0 +1,116 @@
+package org.resonancegate.spec;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * Reads spec files into {@link LoadedSpec}s: one per spec file, sorted by project-relative path.
+ * Bad input of any kind, I/O errors included, becomes diagnostics; one broken file never stops
+ * the others. Files whose {@code format} is the profile format are profiles, not specs, and are
+ * left out of the result.
+ */
+public final class SpecLoader {
+
+    /** One file's outcome before the cross-file check on ids. */
+    private record Read(String file, Optional<String> id, Optional<SourceLocation> idLocation, Optional<Spec> spec,
+                        List<Diagnostic> diagnostics) {
+    }
+
+    private SpecLoader() {
+    }
+
+    /**
+     * @param projectBase the project's base directory: locations are relative to it, profiles stay inside it
+     * @param files       candidate spec files, absolute or relative to {@code projectBase}
+     */
+    public static List<LoadedSpec> load(Path projectBase, List<Path> files) {
+        ProjectPaths paths = new ProjectPaths(projectBase);
+        ProfileResolver resolver = new ProfileResolver(paths);
+        Set<Path> unique = new LinkedHashSet<>();
+        for (Path f : files) {
+            unique.add(paths.absolute(f));
+        }
+        List<Read> reads = new ArrayList<>();
+        for (Path file : unique) {
+            readOne(file, paths, resolver).ifPresent(reads::add);
+        }
+        List<LoadedSpec> loaded = markDuplicateIds(reads);
+        loaded.sort(Comparator.comparing(LoadedSpec::file));
+        return List.copyOf(loaded);
+    }
+
+    /** Empty when the file is a profile. */
+    private static Optional<Read> readOne(Path file, ProjectPaths paths, ProfileResolver resolver) {
+        String name = paths.display(file);
+        Problems problems = new Problems();
+        try {
+            JsonTreeReader.Result json = JsonTreeReader.read(file, name);
+            Optional<JsonNode> root = json.root();
+            if (root.isPresent() && isProfile(root.get())) {
+                return Optional.empty();
+            }
+            problems.addAll(json.diagnostics());
+            if (root.isEmpty()) {
+                return Optional.of(new Read(name, Optional.empty(), Optional.empty(), Optional.empty(), problems.all()));
+            }
+            if (!(root.get() instanceof JsonNode.JsonObject object)) {
+                problems.add(root.get().location(), "a spec file holds one JSON object, such as {\"format\": \""
+                        + SpecReader.SPEC_FORMAT + "\", \"id\": \"CHW-P-02\", ...}; found " + root.get().typeName());
+                return Optional.of(new Read(name, Optional.empty(), Optional.empty(), Optional.empty(), problems.all()));
+            }
+            SpecReader.Outcome outcome = SpecReader.read(object, name, file, resolver, problems);
+            return Optional.of(new Read(name, outcome.id(), outcome.idLocation(),
+                    problems.isEmpty() ? outcome.spec() : Optional.empty(), problems.all()));
+        } catch (RuntimeException e) {
+            // A reader bug must not take the whole build's other specs down with it; it is still an error.
+            problems.add(new SourceLocation(name, 1, 1), "internal error while reading this file ("
+                    + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it");
+            return Optional.of(new Read(name, Optional.empty(), Optional.empty(), Optional.empty(), problems.all()));
+        }
+    }
+
+    private static boolean isProfile(JsonNode root) {
+        return root instanceof JsonNode.JsonObject o
+                && o.get("format").filter(f -> f instanceof JsonNode.JsonString s
+                && s.value().equals(SpecReader.PROFILE_FORMAT)).isPresent();
+    }
+
+    /** Ids are unique in the spec folder: each file sharing an id gets a diagnostic naming the others. */
+    private static List<LoadedSpec> markDuplicateIds(List<Read> reads) {
+        Map<String, List<Read>> byId = new LinkedHashMap<>();
+        for (Read r : reads) {
+            r.id().ifPresent(id -> byId.computeIfAbsent(id, k -> new ArrayList<>()).add(r));
+        }
+        List<LoadedSpec> out = new ArrayList<>();
+        for (Read r : reads) {
+            List<Diagnostic> diagnostics = new ArrayList<>(r.diagnostics());
+            if (r.id().isPresent() && byId.get(r.id().get()).size() > 1) {
+                List<String> others = byId.get(r.id().get()).stream()
+                        .filter(o -> o != r).map(Read::file).sorted().toList();
+                diagnostics.add(new Diagnostic(r.idLocation().orElse(new SourceLocation(r.file(), 1, 1)),
+                        "id \"" + r.id().get() + "\" is also used by " + String.join(", ", others)
+                                + "; each item needs its own id in the spec folder"));
+            }
+            if (diagnostics.isEmpty() && r.spec().isEmpty()) {
+                diagnostics.add(new Diagnostic(new SourceLocation(r.file(), 1, 1),
+                        "internal error: the file gave neither a spec nor a diagnostic; please report it"));
+            }
+            // The file's own problems first, then its profiles', each in reading order by position.
+            List<Diagnostic> distinct = new LinkedHashSet<>(diagnostics).stream()
+                    .sorted(Comparator.comparing((Diagnostic d) -> !d.location().file().equals(r.file()))
+                            .thenComparing(d -> d.location().file())
+                            .thenComparingInt(d -> d.location().line())
+                            .thenComparingInt(d -> d.location().column()))
+                    .toList();
+            out.add(new LoadedSpec(r.file(), r.id(), distinct.isEmpty() ? r.spec() : Optional.empty(), distinct));
+        }
+        return out;
+    }
+}
