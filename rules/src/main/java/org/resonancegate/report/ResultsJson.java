@@ -114,6 +114,14 @@ public final class ResultsJson {
             g.writeNumberProperty("index", mode.index());
             writeNumber(g, "frequencyHz", mode.frequencyHz());
             writeNumber(g, "dampingRatio", mode.dampingRatio());
+            g.writeArrayPropertyStart("shares");
+            for (ModeResult.Share share : mode.shares()) {
+                g.writeStartObject();
+                g.writeStringProperty("motion", share.motion());
+                writeNumber(g, "fraction", share.fraction());
+                g.writeEndObject();
+            }
+            g.writeEndArray();
             g.writeEndObject();
         }
         g.writeEndArray();

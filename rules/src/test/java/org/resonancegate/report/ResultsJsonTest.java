@@ -42,7 +42,8 @@ class ResultsJsonTest {
                         {
                           "index": 1,
                           "frequencyHz": 10.07,
-                          "dampingRatio": 0.05
+                          "dampingRatio": 0.05,
+                          "shares": []
                         }
                       ],
                       "checks": [
@@ -148,6 +149,31 @@ class ResultsJsonTest {
         // shortest round-trip form of the double, not a rounded one
         assertTrue(text.contains("\"frequencyHz\": 23.333333333333332,"), text);
         assertTrue(text.contains("\"speedRpm\": 1400,"), text);
+    }
+
+    @Test
+    void modeSharesAreListedInTheirOrder() {
+        ModeResult rocking = new ModeResult(2, 7.5, OptionalDouble.of(0.04),
+                List.of(new ModeResult.Share("rx", 0.75), new ModeResult.Share("y", 0.25)));
+        String text = ResultsJson.toJson(new Results(List.of(new SpecResult("src/vibration/fan.json",
+                Optional.of("FAN"), SpecStatus.PASS, List.of(rocking), List.of(), List.of()))));
+        assertTrue(text.contains("""
+                        {
+                          "index": 2,
+                          "frequencyHz": 7.5,
+                          "dampingRatio": 0.04,
+                          "shares": [
+                            {
+                              "motion": "rx",
+                              "fraction": 0.75
+                            },
+                            {
+                              "motion": "y",
+                              "fraction": 0.25
+                            }
+                          ]
+                        }
+                """), text);
     }
 
     @Test
