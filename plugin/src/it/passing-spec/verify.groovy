@@ -14,5 +14,9 @@ assert json.specs[0].checks[0].status == 'pass'
 assert Math.abs(json.specs[0].modes[0].frequencyHz - 10.066) < 0.001
 assert log.contains('[INFO] 1 spec: 1 pass, 0 fail, 0 error; 0 criteria failed')
 assert log.contains('[INFO] Caution: a screening aid on linear models.')
+// the help goal describes the check goal's parameters with their user properties
+assert log.contains('resonance-gate:check')
+assert log.contains('User property: resonance-gate.failOnViolation')
+assert log.contains('User property: resonance-gate.specDirectory')
 assert log.contains('BUILD SUCCESS')
 return true
