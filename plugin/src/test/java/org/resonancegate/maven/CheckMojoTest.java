@@ -200,4 +200,13 @@ class CheckMojoTest {
         assertEquals("waived", spec.get("status").asString());
         assertTrue(spec.get("checks").get(0).get("waiver").get("valid").asBoolean());
     }
+
+    @Test
+    @Basedir("/unit/passing")
+    @InjectMojo(goal = "check", pom = "pom.xml")
+    @MojoParameter(name = "outputDirectory", value = "${project.basedir}/pom.xml")
+    void unwritableOutputIsAnExecutionError(CheckMojo mojo) {
+        MojoExecutionException e = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertTrue(e.getMessage().startsWith("resonance-gate: cannot write pom.xml/results.json: "), e.getMessage());
+    }
 }
