@@ -10,8 +10,8 @@ import java.util.stream.Stream;
 /**
  * The candidate spec files below a directory: regular files matching at least one include and no
  * exclude, sorted by their {@code /}-separated relative path so the order (and so every report) is
- * the same on every platform and file system. Symbolic links to directories are not followed,
- * which keeps a link cycle from hanging the build.
+ * the same on every platform and file system. Symbolic links to directories below it are not
+ * followed, which keeps a link cycle from hanging the build.
  */
 final class SpecFileScanner {
 
@@ -23,9 +23,15 @@ final class SpecFileScanner {
         this.excludes = excludes.stream().filter(p -> !p.isBlank()).map(GlobPattern::of).toList();
     }
 
+    /**
+     * @return the selected files, as paths below {@code directory} as given (a spec directory that
+     *         is itself a symbolic link is walked at its target, but reported under its own name)
+     */
     List<Path> scan(Path directory) throws IOException {
-        try (Stream<Path> walk = Files.walk(directory)) {
+        Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
+        try (Stream<Path> walk = Files.walk(root)) {
             return walk.filter(Files::isRegularFile)
+                    .map(file -> directory.resolve(root.relativize(file)))
                     .filter(file -> selected(relative(directory, file)))
                     .sorted(Comparator.comparing(file -> relative(directory, file)))
                     .toList();

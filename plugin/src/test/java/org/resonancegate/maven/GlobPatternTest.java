@@ -3,12 +3,7 @@ package org.resonancegate.maven;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Include/exclude patterns against the semantics Maven documents for resource and fileset
@@ -51,17 +46,5 @@ class GlobPatternTest {
     void regexCharactersAreLiteral() {
         assertTrue(GlobPattern.of("p(1)+[a].json").matches("p(1)+[a].json"));
         assertFalse(GlobPattern.of("p.json").matches("pxjson"));
-    }
-
-    @Test
-    void scannerSortsByRelativePathAndAppliesExcludes(@TempDir Path dir) throws IOException {
-        for (String f : List.of("b.json", "a/z.json", "a/b/c.json", "drafts/d.json", "notes.txt")) {
-            Path file = dir.resolve(f);
-            Files.createDirectories(file.getParent());
-            Files.writeString(file, "{}");
-        }
-        List<String> found = new SpecFileScanner(List.of("**/*.json"), List.of("drafts/**"))
-                .scan(dir).stream().map(p -> SpecFileScanner.relative(dir, p)).toList();
-        org.junit.jupiter.api.Assertions.assertEquals(List.of("a/b/c.json", "a/z.json", "b.json"), found);
     }
 }
