@@ -42,8 +42,11 @@ public final class ConsoleReport {
     }
 
     private static void finding(SpecResult spec, CheckResult check, List<ConsoleLine> lines) {
-        String head = check.location().display() + ": " + spec.id().orElse(spec.file()) + " " + check.criterion()
-                + " " + check.rule() + ": ";
+        // A criterion from a shared profile points at its definition there; the spec file it
+        // was judged for is named too, since that is the file a reviewer looks at.
+        String judged = check.location().file().equals(spec.file()) ? "" : " [" + spec.file() + "]";
+        String head = check.location().display() + ": " + spec.id().orElse(spec.file()) + judged + " "
+                + check.criterion() + " " + check.rule() + ": ";
         switch (check.status()) {
             case PASS -> {
                 // passing criteria are counted in the table, not listed

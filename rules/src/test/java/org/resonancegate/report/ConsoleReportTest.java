@@ -44,10 +44,10 @@ class ConsoleReportTest {
         CheckResult passing = Fixtures.check("ISO", "isolation", CheckStatus.PASS, "T = 0.1", 15);
         CheckResult warned = new CheckResult("SD", "static-deflection", Severity.WARNING, CheckStatus.WARNING, 0.001,
                 0.002, "m", OptionalDouble.empty(), OptionalDouble.empty(), "deflection 1 mm below 2 mm",
-                Fixtures.at("src/vibration/p1.json", 22, 7), Optional.empty(), Optional.empty());
+                Fixtures.at("src/vibration/profiles/plant.json", 22, 7), Optional.empty(), Optional.empty());
         CheckResult waived = new CheckResult("SEP", "separation", Severity.ERROR, CheckStatus.WAIVED, 0.1, 0.2, "1",
                 OptionalDouble.of(1480), OptionalDouble.of(24.67), "mode 1 too close to 1x",
-                Fixtures.at("src/vibration/p1.json", 9, 5), Optional.empty(),
+                Fixtures.at("src/vibration/a/p1.json", 9, 5), Optional.empty(),
                 Optional.of(Fixtures.waiver("start-up only", "2027-03-31", true)));
         CheckResult expired = new CheckResult("VEL", "velocity", Severity.ERROR, CheckStatus.FAIL, 0.004, 0.0028,
                 "m/s", OptionalDouble.of(1480), OptionalDouble.of(24.67), "4 mm/s above 2.8 mm/s",
@@ -65,9 +65,11 @@ class ConsoleReportTest {
                 info("src/vibration/a/p1.json  P-1  waived     1     0       1        1       0"),
                 info("src/vibration/p1.json    P-3  fail       0     1       0        0       0"),
                 info("src/vibration/z.json     Z    pass       1     0       0        0       0"),
-                warning("src/vibration/p1.json:22:7: P-1 SD static-deflection: deflection 1 mm below 2 mm"
+                // a criterion from a profile: its definition, then the spec it was judged for
+                warning("src/vibration/profiles/plant.json:22:7: P-1 [src/vibration/a/p1.json] SD static-deflection:"
+                        + " deflection 1 mm below 2 mm"
                         + " (severity warning: does not fail the spec)"),
-                warning("src/vibration/p1.json:9:5: P-1 SEP separation: waived until 2027-03-31 (start-up only):"
+                warning("src/vibration/a/p1.json:9:5: P-1 SEP separation: waived until 2027-03-31 (start-up only):"
                         + " mode 1 too close to 1x"),
                 error("src/vibration/p1.json:30:7: P-3 VEL velocity: 4 mm/s above 2.8 mm/s"
                         + " (waiver expired 2026-11-30: until the new mounts arrive)"),
