@@ -138,6 +138,21 @@ final class Fields {
         return q;
     }
 
+    /**
+     * A positive quantity of {@code primary} dimension, or of {@code alternative} when the text reads
+     * as that (a criterion's limit is a length on a translation line and an angle in torsion, and a
+     * profile is read before the model that uses it is known). A problem is reported against the
+     * primary dimension.
+     */
+    static Optional<Quantity> positiveEither(JsonNode node, String key, Dimension primary, Dimension alternative,
+                                             Problems problems) {
+        if (node instanceof JsonNode.JsonString s
+                && QuantityParser.parse(s.value(), alternative, key) instanceof UnitParse.Value) {
+            return positive(node, key, alternative, problems);
+        }
+        return positive(node, key, primary, problems);
+    }
+
     /** A quantity that must not be negative (a speed). */
     static Optional<Quantity> nonNegative(JsonNode node, String key, Dimension dimension, Problems problems) {
         Optional<Quantity> q = quantity(node, key, dimension, problems);

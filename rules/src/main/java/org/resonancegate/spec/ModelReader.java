@@ -6,12 +6,10 @@ import java.util.Optional;
 import org.resonancegate.units.Dimension;
 import org.resonancegate.units.Suggestions;
 
-/** Reads the {@code model} object. Format 1 of this release reads the {@code single} kind. */
+/** Reads the {@code model} object: {@code single} here, {@code lumped} and {@code rigid-body} by their readers. */
 final class ModelReader {
 
-    static final List<String> SUPPORTED_KINDS = List.of("single");
-    /** Kinds the format defines that this release does not compute yet. */
-    static final List<String> LATER_KINDS = List.of("lumped", "rigid-body");
+    static final List<String> SUPPORTED_KINDS = List.of("single", "lumped", "rigid-body");
     static final List<String> SINGLE_KEYS = List.of("kind", "mass", "stiffness", "staticDeflection",
             "naturalFrequency", "damping");
     static final List<String> STIFFNESS_FORMS = List.of("stiffness", "staticDeflection", "naturalFrequency");
@@ -35,20 +33,20 @@ final class ModelReader {
             return Optional.empty();
         }
         JsonNode kindNode = model.get("kind").orElseThrow();
-        if (LATER_KINDS.contains(kind.get())) {
-            problems.add(kindNode.location(), "model kind \"" + kind.get() + "\" is not supported yet in this version,"
-                    + " which computes \"single\" models only; \"lumped\" and \"rigid-body\" come with the next release");
-            return Optional.empty();
-        }
-        if (!SUPPORTED_KINDS.contains(kind.get())) {
-            StringBuilder message = new StringBuilder("unknown model kind \"" + kind.get() + "\"");
-            List<String> all = List.of("single", "lumped", "rigid-body");
-            Suggestions.closest(kind.get(), all).ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
-            message.append("; accepted: \"single\" (\"lumped\" and \"rigid-body\" are not supported yet in this version)");
-            problems.add(kindNode.location(), message.toString());
-            return Optional.empty();
-        }
-        return readSingle(model, problems).map(m -> m);
+        return switch (kind.get()) {
+            case "single" -> readSingle(model, problems).map(m -> m);
+            case "lumped" -> LumpedReader.read(model, problems).map(m -> m);
+            case "rigid-body" -> RigidBodyReader.read(model, problems).map(m -> m);
+            default -> {
+                StringBuilder message = new StringBuilder("unknown model kind \"" + kind.get() + "\"");
+                Suggestions.closest(kind.get(), SUPPORTED_KINDS)
+                        .ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
+                message.append("; accepted: \"single\" (one mass on one spring), \"lumped\" (masses or inertias along"
+                        + " one line) and \"rigid-body\" (a rigid machine on mounts)");
+                problems.add(kindNode.location(), message.toString());
+                yield Optional.empty();
+            }
+        };
     }
 
     private static Optional<Model.Single> readSingle(JsonNode.JsonObject model, Problems problems) {
