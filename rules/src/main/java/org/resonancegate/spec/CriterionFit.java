@@ -129,7 +129,7 @@ final class CriterionFit {
                     problems.add(criterion, where + " needs \"at\": the mass whose " + (isolation
                             ? "motion is compared with the base motion" : "response is judged") + ", such as \"at\": \""
                             + shape.masses().get(0) + "\"; the model has several masses ("
-                            + String.join(", ", shape.masses()) + ")");
+                            + Geometry.names(shape.masses()) + ")");
                 }
                 return Optional.empty();
             }

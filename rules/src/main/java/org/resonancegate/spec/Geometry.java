@@ -115,7 +115,14 @@ final class Geometry {
     static String unknownName(String what, String written, List<String> known, String knownAre) {
         StringBuilder message = new StringBuilder(what + " \"" + written + "\" is not defined");
         Suggestions.closest(written, known).ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
-        message.append("; ").append(knownAre).append(": ").append(String.join(", ", known));
+        message.append("; ").append(knownAre).append(": ").append(names(known));
         return message.toString();
+    }
+
+    /** Names for a message: all of a short list, the first few of a long one. */
+    static String names(List<String> names) {
+        int shown = 12;
+        return names.size() <= shown ? String.join(", ", names)
+                : String.join(", ", names.subList(0, shown)) + " and " + (names.size() - shown) + " more";
     }
 }

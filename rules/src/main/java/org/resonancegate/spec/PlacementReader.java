@@ -79,7 +79,7 @@ final class PlacementReader {
             placement = Optional.of(new Placement.AtMass(shape.onlyMass().get(), e.location()));
         } else if (shape.severalMasses()) {
             problems.add(e.location(), where + " needs \"at\": the mass it acts on, such as \"at\": \""
-                    + shape.masses().get(0) + "\"; the model has several masses (" + String.join(", ", shape.masses())
+                    + shape.masses().get(0) + "\"; the model has several masses (" + Geometry.names(shape.masses())
                     + ")");
         }
         return problems.count() == before ? placement : Optional.empty();
@@ -99,7 +99,7 @@ final class PlacementReader {
                     "the masses are");
             if (name.get().equals(Model.Lumped.GROUND)) {
                 message = "\"at\" in " + where + " names \"ground\", which does not move; name a mass: "
-                        + String.join(", ", shape.masses());
+                        + Geometry.names(shape.masses());
             }
             problems.add(node.location(), message);
             return Optional.empty();
