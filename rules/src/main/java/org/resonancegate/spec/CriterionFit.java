@@ -26,14 +26,15 @@ final class CriterionFit {
                                String specFile, Problems problems) {
         List<Criterion> out = new ArrayList<>();
         for (Criterion c : criteria) {
-            int before = problems.count();
-            Criterion fitted = one(c, shape, model, baseMotion, problems);
-            if (problems.count() != before && !c.location().file().equals(specFile)) {
-                problems.add(c.location(), "criterion \"" + c.id() + "\" comes from a profile and does not fit the model"
-                        + " of " + specFile + " (see above); define a criterion \"" + c.id() + "\" in that spec to"
-                        + " replace it");
+            Problems own = new Problems();
+            out.add(one(c, shape, model, baseMotion, own));
+            boolean fromProfile = !c.location().file().equals(specFile);
+            for (Diagnostic d : own.all()) {
+                // The profile serves other specs too: say which spec it does not fit, and how to mend that one.
+                problems.add(d.location(), fromProfile ? d.message() + " (this criterion comes from a profile and does"
+                        + " not fit the model of " + specFile + "; define a criterion \"" + c.id() + "\" in that spec"
+                        + " to replace it there)" : d.message());
             }
-            out.add(fitted);
         }
         return out;
     }
