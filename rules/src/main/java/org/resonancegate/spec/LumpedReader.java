@@ -260,7 +260,7 @@ final class LumpedReader {
         for (List<Model.LumpedMass> part : parts.values()) {
             List<String> names = part.stream().map(m -> "\"" + m.name() + "\"").toList();
             problems.add(part.get(0).location(), (names.size() == 1 ? "mass " : "the part of masses ")
-                    + Geometry.names(names) + (names.size() == 1 ? " is" : " is") + " not tied to ground by any spring"
+                    + Geometry.names(names) + " is not tied to ground by any spring"
                     + " path, so it would move freely (a zero frequency); add a spring from \"ground\", or write"
                     + " \"free\": true in the model if the line really floats");
         }

@@ -103,8 +103,8 @@ final class RigidBodyChecks {
         if (free.isEmpty()) {
             return;
         }
-        problems.add(at, "the mounts leave the body free: " + String.join("; ", describe(free)) + " meets no"
-                + " stiffness (a zero frequency); place the mounts so they do not all lie on one line, and give some"
+        problems.add(at, "the mounts leave the body free: nothing resists " + String.join("; ", describe(free))
+                + " (a zero frequency); place the mounts so they do not all lie on one line, and give some"
                 + " mount stiffness along each axis");
     }
 

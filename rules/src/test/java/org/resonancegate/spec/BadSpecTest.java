@@ -318,6 +318,12 @@ class BadSpecTest {
     }
 
     @Test
+    void axisOnTheForceOfASingleModelIsNotNeeded() {
+        edit(CRITERION, "{\"id\": \"FORCE\", \"rule\": \"transmitted-force\", \"max\": \"2 kN\", \"axis\": \"z\"}");
+        expectOnly("{\"id\": \"FORCE\"", "\"axis\" in criterion \"FORCE\"", "only a rigid body's mounts have axes");
+    }
+
+    @Test
     void atOnACriterionOfASingleModelIsNotNeeded() {
         edit(CRITERION, "{\"id\": \"DISP\", \"rule\": \"displacement\", \"max\": \"0.1 mm\", \"at\": \"pump\"}");
         // The criterion is read before the model is known (profiles serve several specs), so the

@@ -384,4 +384,12 @@ class LumpedSpecTest {
         edit(TRANSLATION, "\"margin\": \"20 %\"", "\"margin\": \"20 %\", \"at\": \"pump\"");
         expectOnlyAfter("\"margin\"", "\"at\"", "rule \"separation\" looks at the modes");
     }
+
+    @Test
+    void baseMotionUnderALineTakesNoDirection() {
+        edit(TRANSLATION, "\"velocity\": \"0.5 mm/s\"}", "\"velocity\": \"0.5 mm/s\", \"direction\": {\"x\": 1, \"y\": 0, \"z\": 0}}");
+        expectOnly("\"direction\"", "a lumped line is vertical");
+        edit(TRANSLATION, "\"0.2 kN\", \"at\": \"frame\"", "\"0.2 kN\", \"at\": \"ground\"");
+        expectOnly("\"ground\"}", "names \"ground\", which does not move", "frame, pump");
+    }
 }

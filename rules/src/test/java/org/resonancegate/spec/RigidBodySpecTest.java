@@ -282,4 +282,26 @@ class RigidBodySpecTest {
         edit("\"minEfficiency\": \"90 %\"}", "\"minEfficiency\": \"90 %\", \"axis\": \"z\"}");
         expectOnly("\"axis\": \"z\"}", "isolation looks along the base motion's direction");
     }
+
+    /** One mount at the centre of gravity holds every translation and no rotation. */
+    @Test
+    void oneMountAtTheCentreOfGravityLeavesEveryRotationFree() {
+        int start = VALID.indexOf("{\"name\": \"A1\"");
+        int end = VALID.indexOf("\n    ]},");
+        text = VALID.substring(0, start) + "{\"name\": \"C\", \"position\": {\"x\": \"0.1 m\", \"y\": \"0 m\", \"z\": \"0.65 m\"},"
+                + " \"stiffness\": {\"x\": \"1 MN/m\", \"y\": \"1 MN/m\", \"z\": \"1 MN/m\"}, \"damping\": {\"lossFactor\": 0.1}}"
+                + VALID.substring(end);
+        loaded = new TestProject(base).loadOne(FILE, text);
+        Diagnostic d = TestProject.assertOnlyDiagnostic(loaded, TestProject.at(FILE, text, "[\n      {\"name\": \"C\"").line(),
+                TestProject.at(FILE, text, "[\n      {\"name\": \"C\"").column(),
+                "nothing resists rotation about x; rotation about y; rotation about z");
+        assertFalse(d.message().contains("translation"), d.message());
+    }
+
+    @Test
+    void modelDampingAndMountDampingAreNotBoth() {
+        edit("\n    ]},", "\n    ], \"damping\": {\"ratio\": 0.05}},");
+        expect("0.1}},\n      {\"name\": \"A2\"", "mount \"A1\" carries its own damping", "one or the other");
+        assertEquals(4, loaded.diagnostics().size(), () -> TestProject.describe(loaded.diagnostics()));
+    }
 }
