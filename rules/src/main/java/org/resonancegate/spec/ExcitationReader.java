@@ -91,7 +91,7 @@ final class ExcitationReader {
                     .flatMap(u -> placement.map(p -> new Excitation.Unbalance(u.name(), u.phase(), u.frequency(),
                             u.amount(), p, u.location())))
                     .map(x -> (Excitation) x);
-            case "force" -> force(e, name, phase, where, shape.torsion(), problems)
+            case "force" -> force(e, name, phase, where, shape, problems)
                     .flatMap(f -> placement.map(p -> new Excitation.Force(f.name(), f.phase(), f.frequency(),
                             f.amplitude(), p, f.location())))
                     .map(x -> (Excitation) x);
@@ -187,11 +187,15 @@ final class ExcitationReader {
 
     /** A force, or in torsion a torque (N·m) on an inertia. */
     private static Optional<Excitation.Force> force(JsonNode.JsonObject e, Optional<String> name, double phase,
-                                                    String where, boolean torsion, Problems problems) {
+                                                    String where, ModelShape shape, Problems problems) {
+        boolean torsion = shape.torsion();
+        // A line whose motion is unreadable has its own diagnostic; either unit is taken here.
+        boolean either = shape.kind() == ModelShape.Kind.LUMPED && shape.motion().isEmpty();
         Optional<ExcitationFrequency> frequency = frequency(e, where, problems);
         Optional<Quantity> amplitude = Fields.required(e, "amplitude", where,
                         torsion ? "\"amplitude\": \"120 N·m\" (a torque, in torsion)" : "\"amplitude\": \"500 N\"", problems)
-                .flatMap(n -> Fields.positive(n, "amplitude", torsion ? Dimension.TORQUE : Dimension.FORCE, problems));
+                .flatMap(n -> either ? Fields.positiveEither(n, "amplitude", Dimension.FORCE, Dimension.TORQUE, problems)
+                        : Fields.positive(n, "amplitude", torsion ? Dimension.TORQUE : Dimension.FORCE, problems));
         if (name.isEmpty() || frequency.isEmpty() || amplitude.isEmpty()) {
             return Optional.empty();
         }

@@ -62,9 +62,7 @@ final class LumpedReader {
         List<Model.LumpedMass> masses = masses(model, torsion, problems);
         List<Model.Spring> springs = springs(model, torsion, masses, problems);
         boolean modelDamped = model.has("damping");
-        if (problems.count() == before) {
-            elementDamping(model, springs, modelDamped, problems);
-        }
+        elementDamping(model, springs, modelDamped, problems);
         if (problems.count() == before) {
             groundTies(model, masses, springs, free, problems);
         }
@@ -197,7 +195,9 @@ final class LumpedReader {
                             torsion ? Dimension.TORSIONAL_STIFFNESS : Dimension.STIFFNESS, problems));
             Optional<ElementDamping> damping = s.get("damping").flatMap(n -> ElementDampingReader.spring(n,
                     torsion ? Dimension.TORSIONAL_DAMPING : Dimension.DAMPING_COEFFICIENT, where, problems));
-            if (name.isPresent() && from.isPresent() && to.isPresent() && stiffness.isPresent()) {
+            // A spring whose damping did not read is left out, so that it is not also called undamped.
+            if (name.isPresent() && from.isPresent() && to.isPresent() && stiffness.isPresent()
+                    && s.has("damping") == damping.isPresent()) {
                 springs.add(new Model.Spring(name.get(), from.get(), to.get(), stiffness.get(), damping, s.location()));
             }
         }

@@ -33,8 +33,7 @@ final class RigidBodyReader {
                 "on each mount, such as \"damping\": {\"coefficient\": \"3 kN·s/m\"}", problems));
         List<Model.Mount> mounts = mounts(model, problems);
         boolean modelDamped = model.has("damping");
-        if (problems.count() == before) {
-            for (Model.Mount m : mounts) {
+        for (Model.Mount m : mounts) {
                 if (modelDamped && m.damping().isPresent()) {
                     problems.add(m.damping().get().values().location(), "mount \"" + m.name() + "\" carries its own"
                             + " damping, but the model has a \"damping\" too (line "
@@ -46,7 +45,6 @@ final class RigidBodyReader {
                             + " \"damping\": {\"ratio\": 0.05} (an undamped model would claim an infinite amplitude at"
                             + " resonance)");
                 }
-            }
         }
         if (inertia.isPresent()) {
             RigidBodyChecks.inertia(inertia.get(), problems);
@@ -152,7 +150,8 @@ final class RigidBodyReader {
                     .flatMap(n -> stiffness(n, where, problems));
             Optional<ElementDamping> damping = stiffness.isEmpty() ? Optional.empty()
                     : m.get("damping").flatMap(n -> ElementDampingReader.mount(n, stiffness.get(), where, problems));
-            if (name.isPresent() && position.isPresent() && stiffness.isPresent()) {
+            // A mount whose damping did not read is left out, so that it is not also called undamped.
+            if (name.isPresent() && position.isPresent() && stiffness.isPresent() && m.has("damping") == damping.isPresent()) {
                 mounts.add(new Model.Mount(name.get(), position.get(), stiffness.get(), damping, m.location()));
             }
         }

@@ -392,4 +392,10 @@ class LumpedSpecTest {
         edit(TRANSLATION, "\"0.2 kN\", \"at\": \"frame\"", "\"0.2 kN\", \"at\": \"ground\"");
         expectOnly("\"ground\"}", "names \"ground\", which does not move", "frame, pump");
     }
+
+    @Test
+    void aSpringWhoseDampingIsWrongIsNotAlsoCalledUndamped() {
+        edit(TRANSLATION, "{\"lossFactor\": 0.1}", "{\"lossFactor\": -0.1}");
+        expectOnly("-0.1", "\"lossFactor\" must lie in (0, ∞)");
+    }
 }

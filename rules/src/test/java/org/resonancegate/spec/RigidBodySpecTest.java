@@ -235,7 +235,9 @@ class RigidBodySpecTest {
         edit(", \"damping\": {\"coefficient\": \"2 kN·s/m\"}}", "}");
         expectOnly("{\"name\": \"B2\"", "mount \"B2\" has no damping and the model has none");
         edit("\n    ]},", "\n    ], \"damping\": {\"coefficient\": \"3 kN·s/m\"}},");
-        expectOnly("\"coefficient\": \"3", "applies to a single model only", "on each mount");
+        expect("\"coefficient\": \"3", "applies to a single model only", "on each mount");
+        // Each mount's own damping also conflicts with the model's: four more.
+        assertEquals(5, loaded.diagnostics().size(), () -> TestProject.describe(loaded.diagnostics()));
     }
 
     // --- placements ------------------------------------------------------------------------
