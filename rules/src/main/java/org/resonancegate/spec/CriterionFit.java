@@ -10,7 +10,9 @@ import org.resonancegate.units.Dimension;
  * Checks the criteria in force (the spec's own and its profiles') against the spec's model, once
  * that is known: whether {@code at} names a point the model has, whether the limits have the
  * model's units (lengths on a translation line, angles in torsion), whether the rule applies at
- * all. Fills in {@code at} where the format gives a default, so the engine never guesses.
+ * all. Fills in {@code at} where it can mean one mass only. An empty {@code at} that remains
+ * means, for isolation, the centre of gravity of a rigid body, or on a lumped line without base
+ * motion the whole line (force transmissibility needs no point).
  */
 final class CriterionFit {
 
@@ -18,16 +20,14 @@ final class CriterionFit {
     }
 
     /**
-     * @param model      the model, when it read without problems (its centre of gravity is the
-     *                   rigid body's default point for isolation)
      * @param baseMotion whether the spec lists a base-motion excitation
      */
-    static List<Criterion> fit(List<Criterion> criteria, ModelShape shape, Optional<Model> model, boolean baseMotion,
+    static List<Criterion> fit(List<Criterion> criteria, ModelShape shape, boolean baseMotion,
                                String specFile, Problems problems) {
         List<Criterion> out = new ArrayList<>();
         for (Criterion c : criteria) {
             Problems own = new Problems();
-            out.add(one(c, shape, model, baseMotion, own));
+            out.add(one(c, shape, baseMotion, own));
             boolean fromProfile = !c.location().file().equals(specFile);
             for (Diagnostic d : own.all()) {
                 // The profile serves other specs too: say which spec it does not fit, and how to mend that one.
@@ -39,7 +39,7 @@ final class CriterionFit {
         return out;
     }
 
-    private static Criterion one(Criterion c, ModelShape shape, Optional<Model> model, boolean baseMotion,
+    private static Criterion one(Criterion c, ModelShape shape, boolean baseMotion,
                                  Problems problems) {
         String where = "criterion \"" + c.id() + "\"";
         boolean torsion = shape.torsion();
@@ -58,17 +58,17 @@ final class CriterionFit {
         }
         if (c instanceof Criterion.Isolation i) {
             return new Criterion.Isolation(i.id(), i.severity(), i.limit(),
-                    at(i.at(), where, shape, model, true, baseMotion, i.location(), problems), i.location());
+                    at(i.at(), where, shape, true, baseMotion, i.location(), problems), i.location());
         }
         if (c instanceof Criterion.Displacement d) {
             units(d.max(), where, shape, Dimension.LENGTH, Dimension.ANGLE, problems);
             return new Criterion.Displacement(d.id(), d.severity(), d.max(), d.measure(),
-                    at(d.at(), where, shape, model, false, baseMotion, d.location(), problems), d.location());
+                    at(d.at(), where, shape, false, baseMotion, d.location(), problems), d.location());
         }
         if (c instanceof Criterion.Velocity v) {
             units(v.max(), where, shape, Dimension.VELOCITY, Dimension.ANGULAR_VELOCITY, problems);
             return new Criterion.Velocity(v.id(), v.severity(), v.max(), v.measure(),
-                    at(v.at(), where, shape, model, false, baseMotion, v.location(), problems), v.location());
+                    at(v.at(), where, shape, false, baseMotion, v.location(), problems), v.location());
         }
         return c;
     }
@@ -98,7 +98,7 @@ final class CriterionFit {
      * velocity, a model with several masses or a rigid body must say which.
      */
     private static Optional<ResponsePoint> at(Optional<ResponsePoint> written, String where, ModelShape shape,
-                                              Optional<Model> model, boolean isolation, boolean baseMotion,
+                                              boolean isolation, boolean baseMotion,
                                               SourceLocation criterion, Problems problems) {
         switch (shape.kind()) {
             case UNKNOWN -> {
@@ -148,9 +148,9 @@ final class CriterionFit {
                             + " axis; without it the largest axis counts)");
                     return Optional.empty();
                 }
-                // Isolation without "at" looks at the centre of gravity (spec-format.md, criteria).
-                return model.filter(m -> m instanceof Model.RigidBody)
-                        .map(m -> new ResponsePoint.OnBody(((Model.RigidBody) m).centreOfGravity(), Optional.empty()));
+                // Isolation without "at" looks at the centre of gravity (spec-format.md, criteria); left
+                // empty, so that findings can call it by that name.
+                return Optional.empty();
             }
             default -> throw new IllegalStateException(shape.kind().toString());
         }

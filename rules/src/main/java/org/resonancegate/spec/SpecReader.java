@@ -86,7 +86,7 @@ final class SpecReader {
                 .flatMap(n -> ((JsonNode.JsonArray) n).items().stream())
                 .anyMatch(e -> e instanceof JsonNode.JsonObject o && o.get("kind").orElse(null)
                         instanceof JsonNode.JsonString k && k.value().equals("base-motion"));
-        criteria = CriterionFit.fit(criteria, shape, model, baseMotion, file, problems);
+        criteria = CriterionFit.fit(criteria, shape, baseMotion, file, problems);
 
         Tolerances tolerances = root.get("tolerances").flatMap(n -> tolerances(n, problems)).orElse(Tolerances.none());
         Set<String> inForce = new HashSet<>();
