@@ -398,4 +398,14 @@ class LumpedSpecTest {
         edit(TRANSLATION, "{\"lossFactor\": 0.1}", "{\"lossFactor\": -0.1}");
         expectOnly("-0.1", "\"lossFactor\" must lie in (0, ∞)");
     }
+
+    @Test
+    void isolationWithoutBaseMotionNeedsNoMassOnALineOfSeveral() {
+        edit(TRANSLATION, ",\n    {\"name\": \"floor\", \"kind\": \"base-motion\", \"order\": 1, \"velocity\": \"0.5 mm/s\"}", "");
+        text = text.replace(", \"maxTransmissibility\": 0.1, \"at\": \"pump\"}", ", \"maxTransmissibility\": 0.1}");
+        loaded = new TestProject(base).loadOne(FILE, text);
+        Criterion.Isolation iso = assertInstanceOf(Criterion.Isolation.class, TestProject.spec(loaded).criteria().get(1));
+        // The force transmissibility is the whole force into the ground: no mass to name.
+        assertEquals(Optional.empty(), iso.at());
+    }
 }
