@@ -183,6 +183,11 @@ final class Fields {
                 }
                 return Optional.of(new Dimensionless(percent / 100, s.value(), node.location()));
             }
+            if (s.value().trim().matches("[+-]?\\d+,\\d+\\s*%?")) {
+                problems.add(node.location(), "\"" + key + "\": \"" + s.value() + "\" uses a decimal comma; write the"
+                        + " decimal point as '.', such as \"" + s.value().trim().replace(',', '.') + "\"");
+                return Optional.empty();
+            }
             problems.add(node.location(), "\"" + key + "\" is dimensionless: write a number or a percentage, such as "
                     + example + "; found \"" + s.value() + "\"");
             return Optional.empty();

@@ -81,7 +81,9 @@ final class ModelReader {
     /**
      * Damping must be positive: zero would claim an infinite amplitude at resonance. A
      * {@code ratio} is accepted in (0, 1) only: ζ ≥ 1 is an overdamped system, which has no
-     * resonance to speak of and almost always means a percentage was typed as a number.
+     * resonance to speak of and almost always means a percentage was typed as a number. The
+     * other ratio forms are held to the same ζ < 1 (η < 2, Q > 0.5; a log decrement is always
+     * below it).
      */
     static Optional<Damping> readDamping(JsonNode node, Problems problems) {
         Optional<JsonNode.JsonObject> object = Fields.object(node, "damping", "{\"ratio\": 0.05}", problems);
@@ -101,11 +103,12 @@ final class ModelReader {
             case "ratio" -> Fields.dimensionlessIn(value, "ratio", "0.05 or \"5 %\"", 0, false, 1, false,
                             " (a ratio of 1 or more is overdamped; 5 % is written 0.05 or \"5 %\")", problems)
                     .map(d -> new Damping.Ratio(d, at));
-            case "lossFactor" -> Fields.dimensionlessIn(value, "lossFactor", "0.1", 0, false,
-                            Double.POSITIVE_INFINITY, false, positive, problems)
+            case "lossFactor" -> Fields.dimensionlessIn(value, "lossFactor", "0.1", 0, false, 2, false,
+                            " (η = 2ζ: a loss factor of 2 or more is an overdamped system, ζ ≥ 1)", problems)
                     .map(d -> new Damping.LossFactor(d, at));
-            case "q" -> Fields.dimensionlessIn(value, "q", "10", 0, false, Double.POSITIVE_INFINITY, false,
-                            positive, problems)
+            case "q" -> Fields.dimensionlessIn(value, "q", "10", 0.5, false, Double.POSITIVE_INFINITY, false,
+                            " (Q = 1/(2ζ): a Q of 0.5 or less is an overdamped system, ζ ≥ 1; did you mean a"
+                                    + " damping ratio, {\"ratio\": ...}?)", problems)
                     .map(d -> new Damping.QualityFactor(d, at));
             case "logDecrement" -> Fields.dimensionlessIn(value, "logDecrement", "0.3", 0, false,
                             Double.POSITIVE_INFINITY, false, positive, problems)

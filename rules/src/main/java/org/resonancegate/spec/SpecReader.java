@@ -120,8 +120,10 @@ final class SpecReader {
             Fields.checkKeys(range, "\"speed\"", List.of("min", "max"), problems);
             Optional<Quantity> min = Fields.required(range, "min", "\"speed\"", "\"min\": \"900 rpm\"", problems)
                     .flatMap(n -> Fields.nonNegative(n, "min", Dimension.SPEED, problems));
+            // A range may start at standstill, but a machine that never turns has nothing to
+            // judge, and a balance grade's unbalance M·G/Ω_max needs a top speed above zero.
             Optional<Quantity> max = Fields.required(range, "max", "\"speed\"", "\"max\": \"1480 rpm\"", problems)
-                    .flatMap(n -> Fields.nonNegative(n, "max", Dimension.SPEED, problems));
+                    .flatMap(n -> Fields.positive(n, "max", Dimension.SPEED, problems));
             if (min.isEmpty() || max.isEmpty()) {
                 return Optional.empty();
             }
@@ -133,7 +135,7 @@ final class SpecReader {
             }
             return Optional.of(new Operation(min.get(), max.get(), false, op.location()));
         }
-        return Fields.nonNegative(speed.get(), "speed", Dimension.SPEED, problems)
+        return Fields.positive(speed.get(), "speed", Dimension.SPEED, problems)
                 .map(s -> new Operation(s, s, true, op.location()));
     }
 
