@@ -12,6 +12,7 @@ import org.resonancegate.criteria.Rules;
 import org.resonancegate.criteria.Ties;
 import org.resonancegate.dynamics.LinearSystem;
 import org.resonancegate.dynamics.Mode;
+import org.resonancegate.dynamics.MotionShare;
 import org.resonancegate.dynamics.SystemBuilder;
 import org.resonancegate.report.CheckResult;
 import org.resonancegate.report.CheckStatus;
@@ -50,7 +51,11 @@ public final class SpecEvaluator {
         }
         List<ModeResult> modes = new ArrayList<>();
         for (Mode m : contexts.get(0).system().modes()) {
-            modes.add(new ModeResult(m.index(), m.frequencyHz(), m.dampingRatio()));
+            List<ModeResult.Share> shares = new ArrayList<>();
+            for (MotionShare share : m.shares()) {
+                shares.add(new ModeResult.Share(share.motion(), share.fraction()));
+            }
+            modes.add(new ModeResult(m.index(), m.frequencyHz(), m.dampingRatio(), shares));
         }
         boolean tolerances = !spec.tolerances().isEmpty();
         List<CheckResult> checks = new ArrayList<>();
