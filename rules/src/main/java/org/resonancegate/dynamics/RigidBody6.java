@@ -212,7 +212,11 @@ public final class RigidBody6 implements LinearSystem {
     public List<Probe> probesAlong(Optional<ResponsePoint> at, Direction direction) {
         double[] r = new double[3];
         String where = "the centre of gravity";
-        if (at.isPresent() && at.get() instanceof ResponsePoint.OnBody body) {
+        if (at.isPresent()) {
+            if (!(at.get() instanceof ResponsePoint.OnBody body)) {
+                throw new IllegalArgumentException("a rigid body names its response point by position, not by mass");
+            }
+            // the motion's own direction is read; an axis named beside the point does not change it
             r = relative(body.point());
             where = describe(body.point());
         }
