@@ -111,10 +111,83 @@ final class ResponseEnvelope {
                 Combination.groups(governing).size(), moves, channels.labels().get(best));
     }
 
+    /**
+     * The largest combined component at one speed, without building per-component lists: the
+     * drives are grouped by frequency once, then every component sums its phasors per group. This
+     * is the sweep's inner loop, so it stays free of allocation per component.
+     */
     static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed) {
+        List<RuleContext.Driven> driven = ctx.respondAt(speed);
+        int drives = driven.size();
+        int[] group = new int[drives];
+        double[] groupOmega = new double[drives];
+        int groups = 0;
+        for (int d = 0; d < drives; d++) {
+            double w = driven.get(d).drive().omega();
+            int found = -1;
+            for (int g = 0; g < groups; g++) {
+                if (Ties.same(groupOmega[g], w)) {
+                    found = g;
+                    break;
+                }
+            }
+            if (found < 0) {
+                found = groups;
+                groupOmega[groups++] = w;
+            }
+            group[d] = found;
+        }
+        double[] sumRe = new double[groups];
+        double[] sumIm = new double[groups];
         double worst = 0;
-        for (List<Combination.Contribution> component : components(ctx, channels, speed)) {
-            worst = Math.max(worst, combine(component, measure));
+        int size = channels.size();
+        for (int j = 0; j < size; j++) {
+            java.util.Arrays.fill(sumRe, 0);
+            java.util.Arrays.fill(sumIm, 0);
+            for (int d = 0; d < drives; d++) {
+                RuleContext.Driven dr = driven.get(d);
+                double re;
+                double im;
+                if (channels.quantity() == Quantity.ELEMENT_FORCE) {
+                    int row = channels.rows()[j];
+                    re = dr.response().elementForces().re(row);
+                    im = dr.response().elementForces().im(row);
+                } else {
+                    double[] g = channels.probes().get(j).gather();
+                    re = 0;
+                    im = 0;
+                    for (int k = 0; k < g.length; k++) {
+                        re += g[k] * dr.response().displacements().re(k);
+                        im += g[k] * dr.response().displacements().im(k);
+                    }
+                    if (channels.quantity() == Quantity.VELOCITY) {
+                        // v = iω·x
+                        double w = dr.drive().omega();
+                        double t = re;
+                        re = -w * im;
+                        im = w * t;
+                    }
+                }
+                if (!Double.isFinite(re) || !Double.isFinite(im)) {
+                    throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
+                            + "' at " + Display.rpm(speed) + " came out as " + re + " + " + im + "i"
+                            + "; check that mass, stiffness and damping are positive and that damping is not zero");
+                }
+                sumRe[group[d]] += re;
+                sumIm[group[d]] += im;
+            }
+            double v = 0;
+            if (measure == Measure.RMS) {
+                for (int g = 0; g < groups; g++) {
+                    v += (sumRe[g] * sumRe[g] + sumIm[g] * sumIm[g]) / 2;
+                }
+                v = Math.sqrt(v);
+            } else {
+                for (int g = 0; g < groups; g++) {
+                    v += Math.sqrt(sumRe[g] * sumRe[g] + sumIm[g] * sumIm[g]);
+                }
+            }
+            worst = Math.max(worst, measure.factor * v);
         }
         return worst;
     }

@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.concurrent.ConcurrentHashMap;
 import org.resonancegate.spec.Direction;
 import org.resonancegate.spec.Model;
 import org.resonancegate.spec.Placement;
@@ -25,7 +24,7 @@ public final class LumpedLine implements LinearSystem {
     private final Map<String, Integer> index = new HashMap<>();
     private final List<ElementRow> elementRows = new ArrayList<>();
     private final List<String> elementLabels = new ArrayList<>();
-    private final Map<Placement, MatrixModel.Pattern> patterns = new ConcurrentHashMap<>();
+    private final ShapeCache<Placement, MatrixModel.Pattern> patterns = new ShapeCache<>();
     private final MatrixModel.BaseShape base;
     private final List<Probe> allMasses = new ArrayList<>();
     private final double[] masses;
@@ -157,7 +156,7 @@ public final class LumpedLine implements LinearSystem {
     @Override
     public Response respond(Load load, double omega) {
         if (load instanceof Load.Force f) {
-            MatrixModel.Pattern p = patterns.computeIfAbsent(f.placement(), this::patternOf);
+            MatrixModel.Pattern p = patterns.get(f.placement(), this::patternOf);
             return core.force(p, f.amplitude(), omega);
         }
         return core.base(base, load.amplitude(), omega);

@@ -2,10 +2,8 @@ package org.resonancegate.dynamics;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.concurrent.ConcurrentHashMap;
 import org.resonancegate.spec.Axis;
 import org.resonancegate.spec.Direction;
 import org.resonancegate.spec.ElementDamping;
@@ -32,8 +30,8 @@ public final class RigidBody6 implements LinearSystem {
     private final List<Model.Mount> mounts;
     private final List<ElementRow> elementRows = new ArrayList<>();
     private final List<String> elementLabels = new ArrayList<>();
-    private final Map<Placement, MatrixModel.Pattern> patterns = new ConcurrentHashMap<>();
-    private final Map<List<Double>, MatrixModel.BaseShape> bases = new ConcurrentHashMap<>();
+    private final ShapeCache<Placement, MatrixModel.Pattern> patterns = new ShapeCache<>();
+    private final ShapeCache<Direction, MatrixModel.BaseShape> bases = new ShapeCache<>();
 
     RigidBody6(Model.RigidBody model, ModelScale scale, OptionalDouble modalRatio) {
         cg = model.centreOfGravity().si();
@@ -138,10 +136,10 @@ public final class RigidBody6 implements LinearSystem {
     @Override
     public Response respond(Load load, double omega) {
         if (load instanceof Load.Force f) {
-            return core.force(patterns.computeIfAbsent(f.placement(), this::patternOf), f.amplitude(), omega);
+            return core.force(patterns.get(f.placement(), this::patternOf), f.amplitude(), omega);
         }
         Direction d = ((Load.GroundMotion) load).direction();
-        MatrixModel.BaseShape b = bases.computeIfAbsent(List.of(d.x(), d.y(), d.z()), k -> baseOf(d));
+        MatrixModel.BaseShape b = bases.get(d, this::baseOf);
         return core.base(b, load.amplitude(), omega);
     }
 
