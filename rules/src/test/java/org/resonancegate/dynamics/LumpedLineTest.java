@@ -185,4 +185,33 @@ class LumpedLineTest {
         // ζ = c/(2√(k·m)) with c unscaled (spec-format.md: dashpot coefficients are not scaled)
         assertEquals(300 / (2 * Math.sqrt(k * mm)), s.modes().get(0).dampingRatio().getAsDouble(), 1e-14);
     }
+
+    // A viscous dashpot on the one spring: the element-damping path (full complex solve) gives
+    // the transmissibility of check-values.md 1.4 with ζ = c/(2√(k·m)) for base motion, and the
+    // spring-plus-dashpot force for a force (Civil Engineering Handbook Eq. 3.23).
+    @ParameterizedTest
+    @CsvSource({"0.05, 0.5, 1.332042", "0.05, 2, 0.339182", "0.10, 3, 0.145366"})
+    void dashpotOnOneSpringGivesTheSdofTransmissibility(double zeta, double beta, double t) {
+        double m = 1;
+        double k = 1;
+        LinearSystem s = build(translation(List.of(mass("set", m)),
+                List.of(spring("s", "ground", "set", k, dashpot(2 * zeta))), Optional.empty()));
+        assertEquals(zeta, s.modes().get(0).dampingRatio().getAsDouble(), 1e-15);
+        assertEquals(t, s.respond(new Load.GroundMotion(Complex.ONE), beta).displacements().abs(0), 5.1e-7);
+        assertEquals(t, s.respond(new Load.Force(Complex.ONE, atMass("set")), beta).groundForces().abs(0), 5.1e-7);
+    }
+
+    // Statics of a series chain: far below the first mode a force on the top mass passes whole
+    // through both springs, and the ground takes all of it.
+    @Test
+    void quasiStaticForcePassesThroughEverySpring() {
+        LinearSystem s = build(translation(List.of(mass("base", 900), mass("pump", 400)),
+                List.of(spring("springs", "ground", "base", 1.3e6), spring("pads", "base", "pump", 2.0e7)),
+                Optional.of(ratio(0.03))));
+        Response r = s.respond(new Load.Force(new Complex(250), atMass("pump")), 1e-3);
+        assertEquals(250, r.elementForces().abs(0), 1e-6);
+        assertEquals(250, r.elementForces().abs(1), 1e-6);
+        assertEquals(250, r.groundForces().abs(0), 1e-6);
+        assertEquals(250 / 1.3e6 + 250 / 2.0e7, r.displacements().re(1), 1e-12);
+    }
 }
