@@ -1,0 +1,49 @@
+package org.resonancegate.maven;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.stream.Stream;
+
+/**
+ * The candidate spec files below a directory: regular files matching at least one include and no
+ * exclude, sorted by their {@code /}-separated relative path so the order (and so every report) is
+ * the same on every platform and file system. Symbolic links to directories below it are not
+ * followed, which keeps a link cycle from hanging the build.
+ */
+final class SpecFileScanner {
+
+    private final List<GlobPattern> includes;
+    private final List<GlobPattern> excludes;
+
+    SpecFileScanner(List<String> includes, List<String> excludes) {
+        this.includes = includes.stream().filter(p -> !p.isBlank()).map(GlobPattern::of).toList();
+        this.excludes = excludes.stream().filter(p -> !p.isBlank()).map(GlobPattern::of).toList();
+    }
+
+    /**
+     * @return the selected files, as paths below {@code directory} as given (a spec directory that
+     *         is itself a symbolic link is walked at its target, but reported under its own name)
+     */
+    List<Path> scan(Path directory) throws IOException {
+        Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
+        try (Stream<Path> walk = Files.walk(root)) {
+            return walk.filter(Files::isRegularFile)
+                    .map(file -> directory.resolve(root.relativize(file)))
+                    .filter(file -> selected(relative(directory, file)))
+                    .sorted(Comparator.comparing(file -> relative(directory, file)))
+                    .toList();
+        }
+    }
+
+    boolean selected(String relativePath) {
+        return includes.stream().anyMatch(p -> p.matches(relativePath))
+                && excludes.stream().noneMatch(p -> p.matches(relativePath));
+    }
+
+    static String relative(Path directory, Path file) {
+        return directory.relativize(file).toString().replace(file.getFileSystem().getSeparator(), "/");
+    }
+}

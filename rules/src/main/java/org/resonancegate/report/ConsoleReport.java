@@ -1,0 +1,141 @@
+package org.resonancegate.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.StringJoiner;
+
+/**
+ * Turns {@link Results} into console lines any front end can print: a table of specs, one line
+ * per finding in the {@code path:line:col: } shape that IDE and CI log matchers pick up, a count
+ * line and a caution. Paths are the project-relative ones the results already carry.
+ */
+public final class ConsoleReport {
+
+    /** Printed after every run: what the numbers are, and what they are not. */
+    public static final String CAUTION = "Caution: a screening aid on linear models. Final designs need a qualified "
+            + "engineer, commissioning measurements and the applicable local codes and standards.";
+
+    private static final String[] HEADINGS = {"file", "id", "status", "pass", "fail", "waived", "warning", "errors"};
+
+    private ConsoleReport() {
+    }
+
+    public static List<ConsoleLine> lines(Results results) {
+        List<ConsoleLine> lines = new ArrayList<>();
+        if (!results.specs().isEmpty()) {
+            for (String row : table(results)) {
+                lines.add(new ConsoleLine(ConsoleLevel.INFO, row));
+            }
+        }
+        for (SpecResult spec : results.specs()) {
+            for (ErrorEntry error : spec.errors()) {
+                lines.add(new ConsoleLine(ConsoleLevel.ERROR,
+                        error.location().display() + ": " + spec.id().orElse(spec.file()) + " " + error.message()));
+            }
+            for (CheckResult check : spec.checks()) {
+                finding(spec, check, lines);
+            }
+        }
+        lines.add(countLine(results));
+        lines.add(new ConsoleLine(ConsoleLevel.INFO, CAUTION));
+        return List.copyOf(lines);
+    }
+
+    private static void finding(SpecResult spec, CheckResult check, List<ConsoleLine> lines) {
+        // A criterion from a shared profile points at its definition there; the spec file it
+        // was judged for is named too, since that is the file a reviewer looks at.
+        String judged = check.location().file().equals(spec.file()) ? "" : " [" + spec.file() + "]";
+        String head = check.location().display() + ": " + spec.id().orElse(spec.file()) + judged + " "
+                + check.criterion() + " " + check.rule() + ": ";
+        switch (check.status()) {
+            case PASS -> {
+                // passing criteria are counted in the table, not listed
+            }
+            case FAIL -> lines.add(new ConsoleLine(ConsoleLevel.ERROR, head + check.message() + check.waiver()
+                    .filter(w -> !w.valid())
+                    .map(w -> " (waiver expired " + w.expires() + ": " + w.reason() + ")")
+                    .orElse("")));
+            case WARNING -> lines.add(new ConsoleLine(ConsoleLevel.WARNING,
+                    head + check.message() + " (severity warning: does not fail the spec)"));
+            case WAIVED -> lines.add(new ConsoleLine(ConsoleLevel.WARNING, head + check.waiver()
+                    .map(w -> "waived until " + w.expires() + " (" + w.reason() + "): ")
+                    .orElse("waived: ") + check.message()));
+        }
+    }
+
+    private static List<String> table(Results results) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(HEADINGS);
+        for (SpecResult spec : results.specs()) {
+            rows.add(new String[] {spec.file(), spec.id().orElse("-"), spec.status().key(),
+                count(spec, CheckStatus.PASS), count(spec, CheckStatus.FAIL), count(spec, CheckStatus.WAIVED),
+                count(spec, CheckStatus.WARNING), Integer.toString(spec.errors().size())});
+        }
+        int[] widths = new int[HEADINGS.length];
+        for (String[] row : rows) {
+            for (int i = 0; i < row.length; i++) {
+                widths[i] = Math.max(widths[i], row[i].codePointCount(0, row[i].length()));
+            }
+        }
+        List<String> out = new ArrayList<>();
+        for (String[] row : rows) {
+            StringBuilder line = new StringBuilder();
+            for (int i = 0; i < row.length; i++) {
+                boolean numeric = i >= 3; // counts align right, text left
+                String cell = row[i];
+                String pad = " ".repeat(widths[i] - cell.codePointCount(0, cell.length()));
+                line.append(numeric ? pad + cell : cell + pad);
+                if (i < row.length - 1) {
+                    line.append("  ");
+                }
+            }
+            out.add(line.toString().stripTrailing());
+        }
+        return out;
+    }
+
+    private static String count(SpecResult spec, CheckStatus status) {
+        return Long.toString(spec.checks().stream().filter(c -> c.status() == status).count());
+    }
+
+    private static ConsoleLine countLine(Results results) {
+        int specs = results.specs().size();
+        if (specs == 0) {
+            return new ConsoleLine(ConsoleLevel.WARNING, "0 specs: nothing checked");
+        }
+        StringJoiner parts = new StringJoiner(", ");
+        long pass = specCount(results, SpecStatus.PASS);
+        long waived = specCount(results, SpecStatus.WAIVED);
+        long fail = specCount(results, SpecStatus.FAIL);
+        long error = specCount(results, SpecStatus.ERROR);
+        parts.add(pass + " pass");
+        if (waived > 0) {
+            parts.add(waived + " waived");
+        }
+        parts.add(fail + " fail");
+        parts.add(error + " error");
+        long failed = checkCount(results, CheckStatus.FAIL);
+        long waivedChecks = checkCount(results, CheckStatus.WAIVED);
+        long warnings = checkCount(results, CheckStatus.WARNING);
+        StringBuilder text = new StringBuilder()
+                .append(specs).append(specs == 1 ? " spec: " : " specs: ").append(parts)
+                .append("; ").append(failed).append(failed == 1 ? " criterion failed" : " criteria failed");
+        if (waivedChecks > 0) {
+            text.append(", ").append(waivedChecks).append(" waived");
+        }
+        if (warnings > 0) {
+            text.append(", ").append(warnings).append(warnings == 1 ? " warning" : " warnings");
+        }
+        ConsoleLevel level = fail + error > 0 ? ConsoleLevel.ERROR
+                : waivedChecks + warnings > 0 ? ConsoleLevel.WARNING : ConsoleLevel.INFO;
+        return new ConsoleLine(level, text.toString());
+    }
+
+    private static long specCount(Results results, SpecStatus status) {
+        return results.specs().stream().filter(s -> s.status() == status).count();
+    }
+
+    private static long checkCount(Results results, CheckStatus status) {
+        return results.specs().stream().flatMap(s -> s.checks().stream()).filter(c -> c.status() == status).count();
+    }
+}

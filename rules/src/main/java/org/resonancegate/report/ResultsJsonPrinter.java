@@ -1,0 +1,84 @@
+package org.resonancegate.report;
+
+import tools.jackson.core.JsonGenerator;
+import tools.jackson.core.PrettyPrinter;
+
+/**
+ * Two-space indentation, {@code "\n"} line ends whatever the platform, {@code "key": value} and
+ * {@code []} / {@code {}} for empty containers. Written by hand rather than configured from the
+ * library's default printer so the bytes cannot drift with a library default or the platform's
+ * line separator. One instance per document: it counts nesting.
+ */
+final class ResultsJsonPrinter implements PrettyPrinter {
+
+    private int depth;
+
+    @Override
+    public void writeRootValueSeparator(JsonGenerator g) {
+        // one root value per file: nothing to separate
+    }
+
+    @Override
+    public void writeStartObject(JsonGenerator g) {
+        g.writeRaw('{');
+        depth++;
+    }
+
+    @Override
+    public void beforeObjectEntries(JsonGenerator g) {
+        newline(g);
+    }
+
+    @Override
+    public void writeObjectNameValueSeparator(JsonGenerator g) {
+        g.writeRaw(": ");
+    }
+
+    @Override
+    public void writeObjectEntrySeparator(JsonGenerator g) {
+        g.writeRaw(',');
+        newline(g);
+    }
+
+    @Override
+    public void writeEndObject(JsonGenerator g, int entries) {
+        depth--;
+        if (entries > 0) {
+            newline(g);
+        }
+        g.writeRaw('}');
+    }
+
+    @Override
+    public void writeStartArray(JsonGenerator g) {
+        g.writeRaw('[');
+        depth++;
+    }
+
+    @Override
+    public void beforeArrayValues(JsonGenerator g) {
+        newline(g);
+    }
+
+    @Override
+    public void writeArrayValueSeparator(JsonGenerator g) {
+        g.writeRaw(',');
+        newline(g);
+    }
+
+    @Override
+    public void writeEndArray(JsonGenerator g, int values) {
+        depth--;
+        if (values > 0) {
+            newline(g);
+        }
+        g.writeRaw(']');
+    }
+
+    private void newline(JsonGenerator g) {
+        g.writeRaw('\n');
+        for (int i = 0; i < depth; i++) {
+            g.writeRaw("  ");
+        }
+    }
+}
