@@ -215,4 +215,24 @@ class MountedModelsTest {
         assertTrue(r.errors().get(0).message().contains("'ISO2'"), r.errors().toString());
         assertTrue(r.errors().get(0).message().contains("by position"), r.errors().toString());
     }
+
+    // transmitted-force on mounts: the largest axis component counts unless an axis is named. A
+    // horizontal force at the CG of the decoupled body (h = 0) loads each of the four mounts with a
+    // quarter of T·F along x (formula 1.4, ζ = 0.05, β = 2: T = 0.339182) and nothing along z.
+    @Test
+    void mountForceLargestAxisOrTheNamedOne() {
+        double wx = Math.sqrt(4.0e5 / 500);
+        double rpm = 2 * wx * 60 / (2 * Math.PI);
+        Excitation push = new Excitation.Force("actuator", 0, order(1), newtons(1000),
+                fixedAt(point(0, 0, 0), 1, 0, 0), AT);
+        Criterion any = transmittedForce("F", 50);
+        Criterion vertical = new Criterion.TransmittedForce("FZ", Severity.ERROR, newtons(50), Optional.of(Axis.Z), AT);
+        SpecResult r = SpecEvaluator.evaluate(spec(section6(0, Optional.of(ratio(0.05))), range(rpm, rpm),
+                List.of(push), List.of(any, vertical)), TODAY);
+        assertEquals(1000 * 0.339182 / 4, r.checks().get(0).value(), 5.1e-7 * 1000 / 4);
+        assertTrue(r.checks().get(0).message().contains("(x)"), r.checks().get(0).message());
+        assertEquals(CheckStatus.FAIL, r.checks().get(0).status());
+        assertEquals(0, r.checks().get(1).value(), 1e-9);
+        assertEquals(CheckStatus.PASS, r.checks().get(1).status());
+    }
 }
