@@ -33,6 +33,27 @@ final class Display {
         return sig(x, 4);
     }
 
+    /**
+     * A running speed (rad/s) as the rpm value a report carries. The trip rpm → rad/s → rpm
+     * leaves a last-digit residue (999.9999999999999 for "1000 rpm"); twelve significant digits
+     * are far finer than any speed a spec states and remove it.
+     */
+    static double rpmValue(double speed) {
+        return twelveDigits(speed * 60 / (2 * Math.PI));
+    }
+
+    /** An angular frequency (rad/s) as the Hz value a report carries, rounded like {@link #rpmValue}. */
+    static double hzValue(double omega) {
+        return twelveDigits(omega / (2 * Math.PI));
+    }
+
+    private static double twelveDigits(double x) {
+        if (!Double.isFinite(x) || x == 0) {
+            return x;
+        }
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
+    }
+
     /** A running speed (rad/s) in rpm. */
     static String rpm(double speed) {
         return sig(speed * 60 / (2 * Math.PI)) + " rpm";
@@ -46,6 +67,29 @@ final class Display {
     /** A fraction as a percentage: 0.153 → "15.3 %". */
     static String percent(double fraction) {
         return sig(fraction * 100, 3) + " %";
+    }
+
+    /**
+     * "mode 3 (rocking about y 71 %, x 27 %) at 8.4 Hz"; a mode of a one-degree-of-freedom model
+     * has no shares and reads "mode 1 at 5.74 Hz".
+     */
+    static String mode(org.resonancegate.dynamics.Mode m) {
+        StringBuilder b = new StringBuilder("mode ").append(m.index());
+        if (!m.shares().isEmpty()) {
+            b.append(" (");
+            for (int i = 0; i < m.shares().size(); i++) {
+                org.resonancegate.dynamics.MotionShare s = m.shares().get(i);
+                b.append(i > 0 ? ", " : "").append(s.reading()).append(' ')
+                        .append(Math.round(s.fraction() * 100)).append(" %");
+            }
+            b.append(')');
+        }
+        return b.append(" at ").append(hz(m.angularFrequency())).toString();
+    }
+
+    /** " in spring 'pads'" style suffix; nothing for an empty label. */
+    static String named(String prefix, String label) {
+        return label.isEmpty() ? "" : prefix + label;
     }
 
     static String speedAndFrequency(double speed, double omega) {

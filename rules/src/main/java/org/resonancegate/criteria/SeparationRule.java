@@ -45,9 +45,9 @@ final class SeparationRule {
         double margin = c.margin().value();
         double badness = margin != 0 ? (margin - worst.value()) / Math.abs(margin) : -worst.value();
         OptionalDouble speedRpm = worst.speed().isPresent()
-                ? OptionalDouble.of(worst.speed().getAsDouble() * 60 / (2 * Math.PI)) : OptionalDouble.empty();
+                ? OptionalDouble.of(Display.rpmValue(worst.speed().getAsDouble())) : OptionalDouble.empty();
         return new Finding(worst.value(), margin, "1", speedRpm,
-                OptionalDouble.of(worst.omega() / (2 * Math.PI)), badness, message(worst, margin, badness > 0));
+                OptionalDouble.of(Display.hzValue(worst.omega())), badness, message(worst, margin, badness > 0));
     }
 
     private static Approach approach(Mode mode, double wn, Excitation e, RuleContext ctx) {
@@ -81,7 +81,7 @@ final class SeparationRule {
     }
 
     private static String message(Approach a, double margin, boolean fails) {
-        String mode = "mode " + a.mode().index() + " at " + Display.hz(a.mode().angularFrequency());
+        String mode = Display.mode(a.mode());
         String source = "excitation '" + a.excitation().name() + "'" + describe(a.excitation());
         if (a.value() == 0) {
             String where = a.speed().isPresent() ? " at " + Display.rpm(a.speed().getAsDouble()) : "";
