@@ -113,18 +113,19 @@ final class CrossCheckSupport {
             expected.put("SEP", new Expected(worst, worst < margin, w[0], Double.NaN, false));
         }
 
-        /** isolation: the largest force transmissibility; stated as maxTransmissibility or minEfficiency = 1 − T. */
-        void isolation(double worstT) {
+        /** isolation: the largest force (or base-motion) transmissibility; {@code keys} may hold an "at"; stated as maxTransmissibility or minEfficiency = 1 − T. */
+        void isolation(double worstT, String keys) {
             double limitT = worstT * factor(random);
             boolean efficiency = limitT < 0.9 && random.nextInt(3) == 0;
             boolean[] w = new boolean[1];
             String sev = severity(w);
             if (efficiency) {
-                add(String.format(Locale.ROOT, "{\"id\": \"ISO\", \"rule\": \"isolation\", \"minEfficiency\": %s%s}",
-                        num(1 - limitT), sev));
+                add(String.format(Locale.ROOT, "{\"id\": \"ISO\", \"rule\": \"isolation\", \"minEfficiency\": %s%s%s}",
+                        num(1 - limitT), keys, sev));
             } else {
                 add(String.format(Locale.ROOT,
-                        "{\"id\": \"ISO\", \"rule\": \"isolation\", \"maxTransmissibility\": %s%s}", num(limitT), sev));
+                        "{\"id\": \"ISO\", \"rule\": \"isolation\", \"maxTransmissibility\": %s%s%s}", num(limitT), keys,
+                        sev));
             }
             expected.put("ISO", new Expected(worstT, worstT > limitT, w[0], Double.NaN, efficiency));
         }
@@ -190,6 +191,14 @@ final class CrossCheckSupport {
 
         Map<String, Expected> expected() {
             return expected;
+        }
+    }
+
+    /** Every feature string appears in at least two of the drawn specs. */
+    static void assertCoverage(Map<String, SpecExpectation> bySpec, List<String> features) {
+        for (String feature : features) {
+            long n = bySpec.values().stream().filter(e -> e.json().contains(feature)).count();
+            assertTrue(n >= 2, "the random draw has " + n + " specs with " + feature);
         }
     }
 

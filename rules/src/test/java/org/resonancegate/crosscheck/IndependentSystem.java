@@ -209,14 +209,54 @@ final class IndependentSystem {
 
     private void respondHysteretic(double w, double scale, double[] fRe, double[] fIm, double[] ptRe, double[] ptIm,
                                    double[] elRe, double[] elIm) {
+        double[] loadRe = new double[n];
+        double[] loadIm = new double[n];
+        for (int p = 0; p < n; p++) {
+            loadRe[p] = scale * fRe[p];
+            loadIm[p] = scale * fIm[p];
+        }
+        solveHysteretic(w, loadRe, loadIm, new double[rows.length], new double[rows.length], ptRe, ptIm, elRe, elIm);
+    }
+
+    /**
+     * Base motion with hysteretic elements: the ground under element row j moves by g_j·Y (g_j the
+     * motion's direction component along the row's axis, 0 for a row not tied to ground), so the
+     * row deforms by r_j·x − g_j·Y and the load is Σ k_j(1 + iη_j)·g_j·Y·r_j; the response x is
+     * absolute (spec-format.md, Excitations). Only for element damping: the format leaves open how a
+     * modal damping ratio acts on a moving ground, so the cross-check does not guess.
+     */
+    void respondBase(double w, double yRe, double yIm, double[] ground, double[] ptRe, double[] ptIm, double[] elRe,
+                     double[] elIm) {
+        if (!Double.isNaN(modalRatio)) {
+            throw new IllegalStateException("base motion is cross-checked with element damping only");
+        }
+        double[] loadRe = new double[n];
+        double[] loadIm = new double[n];
+        double[] offRe = new double[rows.length];
+        double[] offIm = new double[rows.length];
+        for (int j = 0; j < rows.length; j++) {
+            offRe[j] = ground[j] * yRe;
+            offIm[j] = ground[j] * yIm;
+            double kRe = rowK[j] * offRe[j] - rowK[j] * rowEta[j] * offIm[j];
+            double kIm = rowK[j] * offIm[j] + rowK[j] * rowEta[j] * offRe[j];
+            for (int p = 0; p < n; p++) {
+                loadRe[p] += rows[j][p] * kRe;
+                loadIm[p] += rows[j][p] * kIm;
+            }
+        }
+        solveHysteretic(w, loadRe, loadIm, offRe, offIm, ptRe, ptIm, elRe, elIm);
+    }
+
+    private void solveHysteretic(double w, double[] loadRe, double[] loadIm, double[] offRe, double[] offIm,
+                                 double[] ptRe, double[] ptIm, double[] elRe, double[] elIm) {
         double[][] aRe = new double[n][n + 1];
         double[][] aIm = new double[n][n + 1];
         for (int p = 0; p < n; p++) {
             for (int q = 0; q < n; q++) {
                 aRe[p][q] = stiffness[p][q] - w * w * mass[p][q];
             }
-            aRe[p][n] = scale * fRe[p];
-            aIm[p][n] = scale * fIm[p];
+            aRe[p][n] = loadRe[p];
+            aIm[p][n] = loadIm[p];
         }
         for (int j = 0; j < rows.length; j++) {
             for (int p = 0; p < n; p++) {
@@ -231,8 +271,8 @@ final class IndependentSystem {
             ptIm[j] = dot(pointRows[j], x[1]);
         }
         for (int j = 0; j < rows.length; j++) {
-            double dRe = dot(rows[j], x[0]);
-            double dIm = dot(rows[j], x[1]);
+            double dRe = dot(rows[j], x[0]) - offRe[j];
+            double dIm = dot(rows[j], x[1]) - offIm[j];
             // k(1 + iη)·deformation
             elRe[j] = rowK[j] * (dRe - rowEta[j] * dIm);
             elIm[j] = rowK[j] * (dIm + rowEta[j] * dRe);

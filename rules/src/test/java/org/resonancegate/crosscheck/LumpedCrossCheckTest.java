@@ -26,7 +26,8 @@ import org.resonancegate.crosscheck.WorstCase.ProbeKind;
 /**
  * End to end, from spec files on disk to verdicts, for {@code lumped} translation lines: randomly
  * drawn chains of one to four masses (with, now and then, a second spring to ground or a spring
- * that bridges a mass), excited by unbalances and forces at named masses, are judged by the engine
+ * that bridges a mass), excited by unbalances and forces at named masses and, where the springs carry
+ * their own loss factor, by base motion, are judged by the engine
  * and, independently, by {@link IndependentSystem} (EJML eigen solve, textbook modal
  * superposition, or a full complex solve for hysteretic springs) swept by brute force in
  * {@link WorstCase}. Issue 3's "Done when": modes within 0.5 %, every governing value within 1 %,
@@ -35,7 +36,7 @@ import org.resonancegate.crosscheck.WorstCase.ProbeKind;
  * <p>Formulas: spring forces k·(x_to − x_from) with each mode's share times (1 + 2iζ_r·ω/ω_r)
  * (spec-format.md "transmitted-force"; for one mass this is the transmissibility
  * √(1 + (2ζβ)²)/√((1 − β²)² + (2ζβ)²), check-values 1.4); isolation |Σ ground-spring forces| /
- * |applied force| (spec-format.md "isolation"); a lumped unbalance is U·ω²·cos ωt along the line
+ * |applied force|, for base motion |x_at|/|Y| (spec-format.md "isolation"); a lumped unbalance is U·ω²·cos ωt along the line
  * (check-values 1.7); static stretch from K·x = −m·gn per mass, gn = 9.80665 m/s² (CGPM 1901);
  * damping forms ζ = η/2, 1/(2Q), δ/√(4π² + δ²) (check-values 1.11).
  */
@@ -48,17 +49,27 @@ class LumpedCrossCheckTest {
     private record Spring(String name, int from, int to, double k, double eta) {
     }
 
+    /** An excitation; {@code measure} 0, 1, 2 for a base motion given as displacement, velocity, acceleration. */
     private record Exc(String name, Kind kind, int at, double order, double frequencyHz, double amount,
-                       double phaseDeg) {
+                       double phaseDeg, int measure) {
+        Exc(String name, Kind kind, int at, double order, double frequencyHz, double amount, double phaseDeg) {
+            this(name, kind, at, order, frequencyHz, amount, phaseDeg, 0);
+        }
     }
 
     private record Design(String id, List<String> names, double[] masses, List<Spring> springs, String dampingForm,
                           double dampingValue, double tolK, double tolM, double nMin, double nMax,
-                          List<Exc> excitations, boolean omitAt) {
+                          List<Exc> excitations, boolean omitAt, int isoAt) {
         boolean hysteretic() {
             return dampingForm.isEmpty();
         }
     }
+
+    /** Features the random draw must contain at least twice, so a changed seed cannot quietly drop one. */
+    private static final List<String> COVERAGE = List.of("\"base-motion\"", "\"damping\": {\"lossFactor\"",
+            "\"tolerances\"", "\"speed\": \"", "\"phase\"", "\"frequency\"", "\"kind\": \"order\"",
+            "minEfficiency", "peak-to-peak", "\"snubber\"", "\"bridge\"", "\"q\":", "\"logDecrement\":",
+            "\"severity\": \"warning\"");
 
     @TempDir
     Path project;
@@ -69,7 +80,7 @@ class LumpedCrossCheckTest {
         Path dir = Files.createDirectories(project.resolve("src/vibration"));
         List<Path> files = new ArrayList<>();
         Map<String, SpecExpectation> expected = new HashMap<>();
-        for (int i = 0; i < 28; i++) {
+        for (int i = 0; i < 32; i++) {
             Design d = draw(random, i);
             List<IndependentSystem> cases = new ArrayList<>();
             for (double[] c : toleranceCases(d.tolK(), d.tolM())) {
@@ -92,7 +103,8 @@ class LumpedCrossCheckTest {
 
             Criteria criteria = new Criteria(random);
             criteria.separation(worst.separation());
-            criteria.isolation(worst.isolation());
+            boolean base = d.excitations().stream().anyMatch(e -> e.kind() == Kind.BASE);
+            criteria.isolation(worst.isolation(), base ? at(d, d.isoAt()) : "");
             criteria.maximum("DISP", "displacement", worst.probes().get("DISP"), 1e6, "µm",
                     at(d, dispAt) + (p2p ? ", \"measure\": \"peak-to-peak\"" : ""));
             criteria.maximum("VEL", "velocity", worst.probes().get("VEL"), 1e3, "mm/s",
@@ -114,6 +126,7 @@ class LumpedCrossCheckTest {
             }
             expected.put(d.id(), new SpecExpectation(f, nominal.modeZeta.clone(), criteria.expected(), json));
         }
+        CrossCheckSupport.assertCoverage(expected, COVERAGE);
         CrossCheckSupport.runAndCompare(project, files, expected);
     }
 
@@ -139,7 +152,7 @@ class LumpedCrossCheckTest {
         for (int a = 0; a < n; a++) {
             masses[a] = 50 + 2950 * r.nextDouble();
         }
-        boolean hysteretic = r.nextInt(5) == 0;
+        boolean hysteretic = r.nextInt(4) == 0;
         List<Spring> springs = new ArrayList<>();
         for (int a = 0; a < n; a++) {
             double f = 3 + 27 * r.nextDouble();
@@ -202,12 +215,24 @@ class LumpedCrossCheckTest {
             exc.add(new Exc("mains", Kind.FORCE, r.nextInt(n), Double.NaN, 5 + 55 * r.nextDouble(),
                     10 + 190 * r.nextDouble(), 0));
         }
+        if (hysteretic && r.nextInt(5) < 4) {
+            // base motion only with element damping: see IndependentSystem.respondBase
+            int measure = r.nextInt(3);
+            double amount = switch (measure) {
+                case 0 -> (5 + 95 * r.nextDouble()) * 1e-6;
+                case 1 -> (0.5 + 4.5 * r.nextDouble()) * 1e-3;
+                default -> 0.02 + 0.48 * r.nextDouble();
+            };
+            boolean fixed = r.nextBoolean();
+            exc.add(new Exc("floor", Kind.BASE, -1, fixed ? Double.NaN : 1, fixed ? 5 + 35 * r.nextDouble() : Double.NaN,
+                    amount, r.nextBoolean() ? 360 * r.nextDouble() : 0, measure));
+        }
         if (r.nextInt(3) == 0) {
             exc.add(new Exc("blade pass", Kind.ORDER, -1, 5 + r.nextInt(5), Double.NaN, 0, 0));
         }
         return new Design(String.format(Locale.ROOT, "LC-%02d", i), names, masses, springs, form, value,
                 tolerant ? 0.05 + 0.15 * r.nextDouble() : 0, tolerant ? 0.02 + 0.06 * r.nextDouble() : 0, nMin, nMax,
-                exc, n == 1 && r.nextBoolean());
+                exc, n == 1 && r.nextBoolean(), r.nextInt(n));
     }
 
     /** The line for one tolerance case: stiffnesses scaled by ks, masses by ms. */
@@ -272,6 +297,13 @@ class LumpedCrossCheckTest {
         for (Exc e : d.excitations()) {
             double[] re = new double[n];
             double[] im = new double[n];
+            if (e.kind() == Kind.BASE) {
+                // the ground moves along the line under every spring tied to it
+                double[] ground = d.springs().stream().mapToDouble(s -> s.from() < 0 || s.to() < 0 ? 1 : 0).toArray();
+                out.add(new Load(e.kind(), e.order(), e.frequencyHz(), e.amount(), re, im, new WorstCase.Base(
+                        e.measure(), Math.toRadians(e.phaseDeg()), ground, d.isoAt(), new double[] {1})));
+                continue;
+            }
             if (e.kind() != Kind.ORDER) {
                 re[e.at()] = Math.cos(Math.toRadians(e.phaseDeg()));
                 im[e.at()] = Math.sin(Math.toRadians(e.phaseDeg()));
@@ -299,7 +331,7 @@ class LumpedCrossCheckTest {
         StringBuilder exc = new StringBuilder();
         for (Exc e : d.excitations()) {
             exc.append(exc.isEmpty() ? "" : ",\n    ");
-            String at = d.omitAt() ? "" : ", \"at\": \"" + d.names().get(Math.max(e.at(), 0)) + "\"";
+            String at = d.omitAt() || e.at() < 0 ? "" : ", \"at\": \"" + d.names().get(e.at()) + "\"";
             String phase = e.phaseDeg() != 0 ? ", \"phase\": " + q(e.phaseDeg(), "deg") : "";
             String when = Double.isNaN(e.order()) ? "\"frequency\": " + q(e.frequencyHz(), "Hz")
                     : "\"order\": " + num(e.order());
@@ -310,6 +342,12 @@ class LumpedCrossCheckTest {
                 case FORCE -> String.format(Locale.ROOT,
                         "{\"name\": \"%s\", \"kind\": \"force\"%s, %s, \"amplitude\": %s%s}", e.name(), at, when,
                         q(e.amount(), "N"), phase);
+                case BASE -> String.format(Locale.ROOT, "{\"name\": \"%s\", \"kind\": \"base-motion\", %s, %s%s}",
+                        e.name(), when, switch (e.measure()) {
+                            case 0 -> "\"displacement\": " + q(e.amount() * 1e6, "µm");
+                            case 1 -> "\"velocity\": " + q(e.amount() * 1e3, "mm/s");
+                            default -> "\"acceleration\": " + q(e.amount(), "m/s²");
+                        }, phase);
                 case ORDER -> String.format(Locale.ROOT, "{\"name\": \"%s\", \"kind\": \"order\", %s}", e.name(), when);
             });
         }

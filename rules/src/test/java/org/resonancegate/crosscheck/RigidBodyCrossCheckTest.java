@@ -27,7 +27,8 @@ import org.resonancegate.crosscheck.WorstCase.ProbeKind;
  * End to end, from spec files on disk to verdicts, for {@code rigid-body} machines on three to six
  * mounts: randomly drawn bodies (offset centres of gravity, mounts at several heights, inertia
  * tensors with products now and then) carrying rotating unbalances about any signed axis and
- * fixed-direction forces at points, judged by the engine and, independently, by
+ * fixed-direction forces at points (and, on mounts with their own loss factors, base motion along
+ * any direction), judged by the engine and, independently, by
  * {@link IndependentSystem} swept by brute force in {@link WorstCase}. Issue 3's "Done when": modes
  * within 0.5 %, every governing value within 1 %, every status the same.
  *
@@ -48,17 +49,29 @@ class RigidBodyCrossCheckTest {
     private record Mount(String name, double[] position, double[] k, double[] eta) {
     }
 
+    /** An excitation; {@code measure} 0, 1, 2 for a base motion given as displacement, velocity, acceleration. */
     private record Exc(String name, Kind kind, double[] at, String axis, double[] direction, double order,
-                       double frequencyHz, double amount, double phaseDeg) {
+                       double frequencyHz, double amount, double phaseDeg, int measure) {
+        Exc(String name, Kind kind, double[] at, String axis, double[] direction, double order, double frequencyHz,
+            double amount, double phaseDeg) {
+            this(name, kind, at, axis, direction, order, frequencyHz, amount, phaseDeg, 0);
+        }
     }
 
     private record Design(String id, double mass, double[] cg, double[][] inertia, boolean products,
                           List<Mount> mounts, boolean perAxisEta, String dampingForm, double dampingValue, double tolK,
-                          double tolM, double nMin, double nMax, List<Exc> excitations) {
+                          double tolM, double nMin, double nMax, List<Exc> excitations, double[] isoAt,
+                          boolean isoAtWritten) {
         boolean hysteretic() {
             return dampingForm.isEmpty();
         }
     }
+
+    /** Features the random draw must contain at least twice, so a changed seed cannot quietly drop one. */
+    private static final List<String> COVERAGE = List.of("\"base-motion\"", "\"lossFactor\": {\"x\"",
+            "\"lossFactor\": 0", "\"productsOfInertia\"", "\"tolerances\"", "\"speed\": \"", "\"phase\"",
+            "\"frequency\"", "\"kind\": \"order\"", "\"axis\": \"-", "\"axis\": \"z\"", "minEfficiency",
+            "peak-to-peak", "\"q\":", "\"severity\": \"warning\"");
 
     @TempDir
     Path project;
@@ -70,14 +83,15 @@ class RigidBodyCrossCheckTest {
         Path dir = Files.createDirectories(project.resolve("src/vibration"));
         List<Path> files = new ArrayList<>();
         Map<String, SpecExpectation> expected = new HashMap<>();
-        for (int i = 0; i < 24; i++) {
+        for (int i = 0; i < 28; i++) {
             Design d = draw(random, i);
             // criterion points: bearings and a motor foot somewhere on the body
-            double[][] points = new double[3][];
+            double[][] points = new double[4][];
             for (int p = 0; p < 3; p++) {
                 points[p] = new double[] {d.cg()[0] + 1.2 * (random.nextDouble() - 0.5),
                         d.cg()[1] + 0.8 * (random.nextDouble() - 0.5), d.cg()[2] + 0.6 * (random.nextDouble() - 0.3)};
             }
+            points[3] = d.isoAt(); // where a base-motion isolation is judged: the CG unless "at" says otherwise
             List<IndependentSystem> cases = new ArrayList<>();
             for (double[] c : LumpedCrossCheckTest.toleranceCases(d.tolK(), d.tolM())) {
                 cases.add(system(d, points, c[0], c[1]));
@@ -99,7 +113,7 @@ class RigidBodyCrossCheckTest {
 
             Criteria criteria = new Criteria(random);
             criteria.separation(worst.separation());
-            criteria.isolation(worst.isolation());
+            criteria.isolation(worst.isolation(), d.isoAtWritten() ? ", \"at\": " + point(d.isoAt()) : "");
             criteria.maximum("DISP", "displacement", worst.probes().get("DISP"), 1e6, "µm",
                     at(points[0], dispAxis) + (p2p ? ", \"measure\": \"peak-to-peak\"" : ""));
             criteria.maximum("VEL", "velocity", worst.probes().get("VEL"), 1e3, "mm/s",
@@ -122,6 +136,7 @@ class RigidBodyCrossCheckTest {
             }
             expected.put(d.id(), new SpecExpectation(f, nominal.modeZeta.clone(), criteria.expected(), json));
         }
+        CrossCheckSupport.assertCoverage(expected, COVERAGE);
         CrossCheckSupport.runAndCompare(project, files, expected);
     }
 
@@ -192,7 +207,7 @@ class RigidBodyCrossCheckTest {
             }
         }
         boolean level = r.nextBoolean();
-        boolean hysteretic = r.nextInt(5) == 0;
+        boolean hysteretic = r.nextInt(3) == 0;
         boolean perAxisEta = hysteretic && r.nextBoolean();
         double fv = 4 + 8 * r.nextDouble();
         double kzTotal = m * Math.pow(2 * Math.PI * fv, 2);
@@ -221,6 +236,7 @@ class RigidBodyCrossCheckTest {
             }
         }
         boolean tolerant = r.nextBoolean();
+        boolean isoWritten = r.nextBoolean();
         double nMin;
         double nMax;
         if (r.nextInt(8) == 0) {
@@ -246,12 +262,27 @@ class RigidBodyCrossCheckTest {
             exc.add(new Exc("transformer hum", Kind.FORCE, bodyPoint(r, cg, a, b), null, new double[] {0, 0, 1},
                     Double.NaN, 5 + 45 * r.nextDouble(), 20 + 280 * r.nextDouble(), 0));
         }
+        if (hysteretic && r.nextInt(5) < 4) {
+            // base motion only with element damping: see IndependentSystem.respondBase
+            int measure = r.nextInt(3);
+            double amount = switch (measure) {
+                case 0 -> (5 + 95 * r.nextDouble()) * 1e-6;
+                case 1 -> (0.5 + 4.5 * r.nextDouble()) * 1e-3;
+                default -> 0.02 + 0.48 * r.nextDouble();
+            };
+            boolean fixed = r.nextBoolean();
+            double[] direction = r.nextBoolean() ? null
+                    : new double[] {2 * r.nextDouble() - 1, 2 * r.nextDouble() - 1, 0.5 + r.nextDouble()};
+            exc.add(new Exc("floor", Kind.BASE, null, null, direction, fixed ? Double.NaN : 1,
+                    fixed ? 5 + 35 * r.nextDouble() : Double.NaN, amount, r.nextBoolean() ? 360 * r.nextDouble() : 0,
+                    measure));
+        }
         if (r.nextInt(3) == 0) {
             exc.add(new Exc("blade pass", Kind.ORDER, null, null, null, 5 + r.nextInt(8), Double.NaN, 0, 0));
         }
         return new Design(String.format(Locale.ROOT, "RB-%02d", i), m, cg, inertia, products, mounts, perAxisEta,
                 form, value, tolerant ? 0.05 + 0.15 * r.nextDouble() : 0, tolerant ? 0.02 + 0.06 * r.nextDouble() : 0,
-                nMin, nMax, exc);
+                nMin, nMax, exc, isoWritten ? bodyPoint(r, cg, a, b) : cg, isoWritten);
     }
 
     private static double[] bodyPoint(Random r, double[] cg, double a, double b) {
@@ -352,6 +383,19 @@ class RigidBodyCrossCheckTest {
         for (Exc e : d.excitations()) {
             double[] re = new double[6];
             double[] im = new double[6];
+            if (e.kind() == Kind.BASE) {
+                // the ground under every mount moves along the unit direction (default z)
+                double[] dir = e.direction() == null ? new double[] {0, 0, 1} : e.direction();
+                double norm = Math.sqrt(IndependentSystem.dot(dir, dir));
+                double[] unit = {dir[0] / norm, dir[1] / norm, dir[2] / norm};
+                double[] ground = new double[3 * d.mounts().size()];
+                for (int j = 0; j < ground.length; j++) {
+                    ground[j] = unit[j % 3];
+                }
+                out.add(new Load(e.kind(), e.order(), e.frequencyHz(), e.amount(), re, im, new WorstCase.Base(
+                        e.measure(), Math.toRadians(e.phaseDeg()), ground, 3, unit)));
+                continue;
+            }
             if (e.kind() != Kind.ORDER) {
                 double ph = Math.toRadians(e.phaseDeg());
                 double[] fRe = new double[3];
@@ -423,6 +467,14 @@ class RigidBodyCrossCheckTest {
                                 + " %s, \"amplitude\": %s%s}",
                         e.name(), point(e.at()), num(e.direction()[0]), num(e.direction()[1]), num(e.direction()[2]),
                         when, q(e.amount(), "N"), phase);
+                case BASE -> String.format(Locale.ROOT, "{\"name\": \"%s\", \"kind\": \"base-motion\", %s, %s%s%s}",
+                        e.name(), when, switch (e.measure()) {
+                            case 0 -> "\"displacement\": " + q(e.amount() * 1e6, "µm");
+                            case 1 -> "\"velocity\": " + q(e.amount() * 1e3, "mm/s");
+                            default -> "\"acceleration\": " + q(e.amount(), "m/s²");
+                        }, e.direction() == null ? "" : String.format(Locale.ROOT,
+                                ", \"direction\": {\"x\": %s, \"y\": %s, \"z\": %s}", num(e.direction()[0]),
+                                num(e.direction()[1]), num(e.direction()[2])), phase);
                 case ORDER -> String.format(Locale.ROOT, "{\"name\": \"%s\", \"kind\": \"order\", %s}", e.name(), when);
             });
         }

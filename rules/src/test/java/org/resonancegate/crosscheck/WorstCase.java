@@ -20,21 +20,38 @@ final class WorstCase {
     static final int GRID = 20_001;
     static final int LOCAL = 1_001;
 
-    enum Kind { UNBALANCE, FORCE, ORDER }
+    enum Kind { UNBALANCE, FORCE, BASE, ORDER }
 
     /**
      * One excitation. {@code order} is NaN for a fixed {@code frequencyHz}. The load shape
      * (re, im) over the degrees of freedom is per unit force, with a peak of one over a cycle;
      * {@code amount} is the unbalance U (kg·m, force U·ω²) or the force amplitude (N).
      */
-    record Load(Kind kind, double order, double frequencyHz, double amount, double[] re, double[] im) {
+    record Load(Kind kind, double order, double frequencyHz, double amount, double[] re, double[] im, Base base) {
+        Load(Kind kind, double order, double frequencyHz, double amount, double[] re, double[] im) {
+            this(kind, order, frequencyHz, amount, re, im, null);
+        }
+
         double omega(double shaft) {
             return Double.isNaN(order) ? 2 * Math.PI * frequencyHz : order * shaft;
         }
 
+        /** The force amplitude, or for base motion the ground's displacement amplitude (amount/ω^measure). */
         double force(double w) {
-            return kind == Kind.UNBALANCE ? amount * w * w : amount;
+            return switch (kind) {
+                case UNBALANCE -> amount * w * w;
+                case BASE -> amount / Math.pow(w, base.measure());
+                default -> amount;
+            };
         }
+    }
+
+    /**
+     * Base motion: {@code measure} 0, 1, 2 for a displacement, velocity or acceleration amplitude
+     * (|Y| = A/ω^measure, check-values 3.9); {@code ground} the motion's component along every
+     * element row; isolation is |isoDir·u(isoPoint)|/Y (spec-format.md, "isolation").
+     */
+    record Base(int measure, double phaseRad, double[] ground, int isoPoint, double[] isoDir) {
     }
 
     enum ProbeKind { DISPLACEMENT, VELOCITY, FORCE }
@@ -107,16 +124,32 @@ final class WorstCase {
                     Load load = driving.get(l);
                     double w = load.omega(shaft);
                     double f = load.force(w);
-                    sys.respond(w, f, load.re(), load.im(), ptRe, ptIm, elRe, elIm);
-                    Arrays.fill(gRe, 0);
-                    Arrays.fill(gIm, 0);
-                    for (int j = 0; j < nEl; j++) {
-                        if (sys.rowGround[j] >= 0) {
-                            gRe[sys.rowGround[j]] += elRe[j];
-                            gIm[sys.rowGround[j]] += elIm[j];
+                    if (load.kind() == Kind.BASE) {
+                        Base b = load.base();
+                        // The stated quantity is A·cos(ωt + φ) (spec-format.md, Excitations); integrating a
+                        // harmonic divides by iω, so Y = A·e^{iφ}/(iω)^measure: magnitude A/ω^measure,
+                        // phase φ − measure·π/2.
+                        double ph = b.phaseRad() - b.measure() * Math.PI / 2;
+                        sys.respondBase(w, f * Math.cos(ph), f * Math.sin(ph), b.ground(), ptRe, ptIm, elRe, elIm);
+                        double uRe = 0;
+                        double uIm = 0;
+                        for (int c = 0; c < b.isoDir().length; c++) {
+                            uRe += b.isoDir()[c] * ptRe[sys.pointStart[b.isoPoint()] + c];
+                            uIm += b.isoDir()[c] * ptIm[sys.pointStart[b.isoPoint()] + c];
                         }
+                        isolation = Math.max(isolation, Math.hypot(uRe, uIm) / f);
+                    } else {
+                        sys.respond(w, f, load.re(), load.im(), ptRe, ptIm, elRe, elIm);
+                        Arrays.fill(gRe, 0);
+                        Arrays.fill(gIm, 0);
+                        for (int j = 0; j < nEl; j++) {
+                            if (sys.rowGround[j] >= 0) {
+                                gRe[sys.rowGround[j]] += elRe[j];
+                                gIm[sys.rowGround[j]] += elIm[j];
+                            }
+                        }
+                        isolation = Math.max(isolation, ellipsePeak(gRe, gIm) / f);
                     }
-                    isolation = Math.max(isolation, ellipsePeak(gRe, gIm) / f);
                     int g = groupOf[l];
                     gw[g] = w;
                     for (int j = 0; j < nPt; j++) {
