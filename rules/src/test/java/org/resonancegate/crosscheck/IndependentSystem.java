@@ -46,6 +46,7 @@ final class IndependentSystem {
     final int[] pointCount;
     /** The element row whose deformation is the element's static deflection. */
     final int[] staticRow;
+    /** Null where gravity does not apply (torsion). */
     final double[] gravityLoad;
     /** Model-level modal damping ratio, or NaN under element (hysteretic) damping. */
     final double modalRatio;
@@ -121,15 +122,16 @@ final class IndependentSystem {
         omega = new double[n];
         phi = new double[n][];
         modeZeta = new double[n];
+        double largest = lambda[order[n - 1]];
         for (int r = 0; r < n; r++) {
-            if (lambda[order[r]] <= 0) {
-                throw new IllegalStateException("not a restrained system");
-            }
-            omega[r] = Math.sqrt(lambda[order[r]]);
+            // a free line ("free": true) has a rigid-body mode: ω² zero up to round-off
+            omega[r] = lambda[order[r]] < 1e-9 * largest ? 0 : Math.sqrt(lambda[order[r]]);
             phi[r] = vec[order[r]];
         }
         for (int r = 0; r < n; r++) {
-            if (Double.isNaN(modalRatio)) {
+            if (omega[r] == 0) {
+                modeZeta[r] = Double.NaN; // a zero-frequency mode has no damping ratio
+            } else if (Double.isNaN(modalRatio)) {
                 // Diagonal modal estimate ζ_r = φᵀ·H·φ/(2ω_r²), H = Σ η·k·r·rᵀ (spec-format.md, Fine points).
                 double h = 0;
                 for (int j = 0; j < rows.length; j++) {
@@ -159,7 +161,7 @@ final class IndependentSystem {
         return omega[r] / (2 * Math.PI);
     }
 
-    /** Static deflection of every element under gravity: K·x = gravity load, solved with EJML. */
+    /** Static deflection of every element under gravity: K·x = gravity load, solved with EJML (none for torsion). */
     double[] staticDeflections() {
         DMatrixRMaj x = new DMatrixRMaj(n, 1);
         if (!CommonOps_DDRM.solve(new DMatrixRMaj(stiffness), new DMatrixRMaj(n, 1, true, gravityLoad), x)) {
@@ -188,7 +190,7 @@ final class IndependentSystem {
             double pIm = scale * dot(phi[r], fIm);
             // c_r = p / (ω_r² − ω² + 2iζω_rω)
             double dRe = omega[r] * omega[r] - w * w;
-            double dIm = 2 * modeZeta[r] * omega[r] * w;
+            double dIm = omega[r] == 0 ? 0 : 2 * modeZeta[r] * omega[r] * w;
             double den = dRe * dRe + dIm * dIm;
             double cRe = (pRe * dRe + pIm * dIm) / den;
             double cIm = (pIm * dRe - pRe * dIm) / den;
@@ -197,7 +199,7 @@ final class IndependentSystem {
                 ptIm[j] += pointPhi[j][r] * cIm;
             }
             // element share times (1 + i·2ζ_r·ω/ω_r)
-            double g = 2 * modeZeta[r] * w / omega[r];
+            double g = omega[r] == 0 ? 0 : 2 * modeZeta[r] * w / omega[r]; // a rigid mode deforms no element
             double sRe = cRe - g * cIm;
             double sIm = cIm + g * cRe;
             for (int j = 0; j < rows.length; j++) {

@@ -59,7 +59,7 @@ class LumpedCrossCheckTest {
 
     private record Design(String id, List<String> names, double[] masses, List<Spring> springs, String dampingForm,
                           double dampingValue, double tolK, double tolM, double nMin, double nMax,
-                          List<Exc> excitations, boolean omitAt, int isoAt) {
+                          List<Exc> excitations, boolean omitAt, int isoAt, boolean torsion, boolean free) {
         boolean hysteretic() {
             return dampingForm.isEmpty();
         }
@@ -81,53 +81,87 @@ class LumpedCrossCheckTest {
         List<Path> files = new ArrayList<>();
         Map<String, SpecExpectation> expected = new HashMap<>();
         for (int i = 0; i < 32; i++) {
-            Design d = draw(random, i);
-            List<IndependentSystem> cases = new ArrayList<>();
-            for (double[] c : toleranceCases(d.tolK(), d.tolM())) {
-                cases.add(system(d, c[0], c[1]));
-            }
-            int dispAt = random.nextInt(d.masses().length);
-            int velAt = random.nextInt(d.masses().length);
-            int vel2At = random.nextInt(d.masses().length);
-            boolean p2p = random.nextInt(3) == 0;
-            boolean velPeak = random.nextInt(3) == 0;
-            boolean second = d.masses().length > 1 && random.nextBoolean();
-            List<Probe> probes = new ArrayList<>(List.of(
-                    new Probe("DISP", ProbeKind.DISPLACEMENT, dispAt, -1, p2p),
-                    new Probe("VEL", ProbeKind.VELOCITY, velAt, -1, velPeak),
-                    new Probe("FORCE", ProbeKind.FORCE, -1, -1, false)));
-            if (second) {
-                probes.add(new Probe("VEL2", ProbeKind.VELOCITY, vel2At, -1, false));
-            }
-            WorstCase.Worst worst = WorstCase.evaluate(cases, loads(d), d.nMin(), d.nMax(), probes);
-
-            Criteria criteria = new Criteria(random);
-            criteria.separation(worst.separation());
-            boolean base = d.excitations().stream().anyMatch(e -> e.kind() == Kind.BASE);
-            criteria.isolation(worst.isolation(), base ? at(d, d.isoAt()) : "");
-            criteria.maximum("DISP", "displacement", worst.probes().get("DISP"), 1e6, "µm",
-                    at(d, dispAt) + (p2p ? ", \"measure\": \"peak-to-peak\"" : ""));
-            criteria.maximum("VEL", "velocity", worst.probes().get("VEL"), 1e3, "mm/s",
-                    at(d, velAt) + (velPeak ? ", \"measure\": \"peak\"" : ""));
-            if (second) {
-                criteria.maximum("VEL2", "velocity", worst.probes().get("VEL2"), 1e3, "mm/s", at(d, vel2At));
-            }
-            criteria.maximum("FORCE", "transmitted-force", worst.probes().get("FORCE"), 1, "N", "");
-            criteria.staticDeflection(worst.deflections());
-
-            String json = specJson(d, criteria.json());
-            Path file = dir.resolve(d.id().toLowerCase(Locale.ROOT) + ".json");
-            Files.writeString(file, json, StandardCharsets.UTF_8);
-            files.add(file);
-            IndependentSystem nominal = cases.get(0);
-            double[] f = new double[nominal.n];
-            for (int r = 0; r < nominal.n; r++) {
-                f[r] = nominal.frequencyHz(r);
-            }
-            expected.put(d.id(), new SpecExpectation(f, nominal.modeZeta.clone(), criteria.expected(), json));
+            judge(random, draw(random, i), dir, files, expected);
         }
         CrossCheckSupport.assertCoverage(expected, COVERAGE);
         CrossCheckSupport.runAndCompare(project, files, expected);
+    }
+
+    /**
+     * Torsion lines (spec-format.md: inertias in kg·m², torsional stiffness in N·m/rad, a "force"
+     * is a torque; no unbalance, base motion or static deflection), some of them free shaft trains
+     * ("free": true) whose zero-frequency mode has no damping ratio and is left out of separation.
+     * The same independent modal computation applies with angle for displacement (check-values §7
+     * closed forms hold for torsion with J for m and k_t for k).
+     */
+    @Test
+    void randomTorsionLinesAgreeWithTheIndependentComputationWithinOnePercentAndInEveryStatus() throws IOException {
+        Random random = new Random(7_2026_1202L);
+        Path dir = Files.createDirectories(project.resolve("src/vibration"));
+        List<Path> files = new ArrayList<>();
+        Map<String, SpecExpectation> expected = new HashMap<>();
+        for (int i = 0; i < 18; i++) {
+            judge(random, drawTorsion(random, i), dir, files, expected);
+        }
+        CrossCheckSupport.assertCoverage(expected, List.of("\"free\": true", "\"lossFactor\"", "\"tolerances\"",
+                "\"phase\"", "\"kind\": \"order\"", "\"severity\": \"warning\""));
+        CrossCheckSupport.runAndCompare(project, files, expected);
+    }
+
+    private static void judge(Random random, Design d, Path dir, List<Path> files, Map<String, SpecExpectation> expected)
+            throws IOException {
+        List<IndependentSystem> cases = new ArrayList<>();
+        for (double[] c : toleranceCases(d.tolK(), d.tolM())) {
+            cases.add(system(d, c[0], c[1]));
+        }
+        int dispAt = random.nextInt(d.masses().length);
+        int velAt = random.nextInt(d.masses().length);
+        int vel2At = random.nextInt(d.masses().length);
+        boolean p2p = random.nextInt(3) == 0;
+        boolean velPeak = random.nextInt(3) == 0;
+        boolean second = d.masses().length > 1 && random.nextBoolean();
+        List<Probe> probes = new ArrayList<>(List.of(
+                new Probe("DISP", ProbeKind.DISPLACEMENT, dispAt, -1, p2p),
+                new Probe("VEL", ProbeKind.VELOCITY, velAt, -1, velPeak),
+                new Probe("FORCE", ProbeKind.FORCE, -1, -1, false)));
+        if (second) {
+            probes.add(new Probe("VEL2", ProbeKind.VELOCITY, vel2At, -1, false));
+        }
+        WorstCase.Worst worst = WorstCase.evaluate(cases, loads(d), d.nMin(), d.nMax(), probes);
+
+        Criteria criteria = new Criteria(random);
+        criteria.separation(worst.separation());
+        boolean base = d.excitations().stream().anyMatch(e -> e.kind() == Kind.BASE);
+        if (!d.free()) { // a free line puts nothing into the ground
+            criteria.isolation(worst.isolation(), base ? at(d, d.isoAt()) : "");
+        }
+        // torsion: angle in mrad, angular velocity in rad/s, torque in N·m
+        double dispScale = d.torsion() ? 1e3 : 1e6;
+        String dispUnit = d.torsion() ? "mrad" : "µm";
+        double velScale = d.torsion() ? 1 : 1e3;
+        String velUnit = d.torsion() ? "rad/s" : "mm/s";
+        criteria.maximum("DISP", "displacement", worst.probes().get("DISP"), dispScale, dispUnit,
+                at(d, dispAt) + (p2p ? ", \"measure\": \"peak-to-peak\"" : ""));
+        criteria.maximum("VEL", "velocity", worst.probes().get("VEL"), velScale, velUnit,
+                at(d, velAt) + (velPeak ? ", \"measure\": \"peak\"" : ""));
+        if (second) {
+            criteria.maximum("VEL2", "velocity", worst.probes().get("VEL2"), velScale, velUnit, at(d, vel2At));
+        }
+        criteria.maximum("FORCE", "transmitted-force", worst.probes().get("FORCE"), 1, d.torsion() ? "N·m" : "N", "");
+        if (!d.torsion()) {
+            criteria.staticDeflection(worst.deflections());
+        }
+
+        String json = specJson(d, criteria.json());
+        Path file = dir.resolve(d.id().toLowerCase(Locale.ROOT) + ".json");
+        Files.writeString(file, json, StandardCharsets.UTF_8);
+        files.add(file);
+        IndependentSystem nominal = cases.get(0);
+        double[] f = new double[nominal.n];
+        for (int r = 0; r < nominal.n; r++) {
+            f[r] = nominal.frequencyHz(r);
+        }
+        expected.put(d.id(), new SpecExpectation(f, nominal.modeZeta.clone(), criteria.expected(), json));
     }
 
     /** Nominal first, then (k−, m−), (k−, m+), (k+, m−), (k+, m+) (spec-format.md, worst case within tolerances). */
@@ -232,7 +266,44 @@ class LumpedCrossCheckTest {
         }
         return new Design(String.format(Locale.ROOT, "LC-%02d", i), names, masses, springs, form, value,
                 tolerant ? 0.05 + 0.15 * r.nextDouble() : 0, tolerant ? 0.02 + 0.06 * r.nextDouble() : 0, nMin, nMax,
-                exc, n == 1 && r.nextBoolean(), r.nextInt(n));
+                exc, n == 1 && r.nextBoolean(), r.nextInt(n), false, false);
+    }
+
+    /** A shaft train: motor, coupling hub, gearbox, pump inertias; grounded through its first spring unless free. */
+    private static Design drawTorsion(Random r, int i) {
+        boolean free = r.nextInt(3) == 0;
+        int n = (free ? 2 : 1) + r.nextInt(3);
+        List<String> pool = new ArrayList<>(List.of("motor rotor", "coupling hub", "gear wheel", "impeller", "flywheel"));
+        Collections.shuffle(pool, r);
+        List<String> names = pool.subList(0, n);
+        double[] inertia = new double[n];
+        for (int a = 0; a < n; a++) {
+            inertia[a] = 0.5 + 49.5 * r.nextDouble();
+        }
+        boolean hysteretic = r.nextInt(4) == 0;
+        List<Spring> springs = new ArrayList<>();
+        for (int a = free ? 1 : 0; a < n; a++) {
+            double f = 5 + 55 * r.nextDouble();
+            double k = inertia[a] * Math.pow(2 * Math.PI * f, 2);
+            boolean flip = r.nextInt(3) == 0;
+            springs.add(new Spring("shaft " + (a + 1), flip ? a : a - 1, flip ? a - 1 : a, k,
+                    hysteretic ? 0.04 + 0.2 * r.nextDouble() : Double.NaN));
+        }
+        double zeta = 0.02 + 0.08 * r.nextDouble();
+        boolean tolerant = r.nextBoolean();
+        double nMin = 600 + 1800 * r.nextDouble();
+        double nMax = nMin * (1.1 + 0.6 * r.nextDouble());
+        List<Exc> exc = new ArrayList<>();
+        exc.add(new Exc("motor torque ripple", Kind.FORCE, r.nextInt(n), 1 + r.nextInt(2), Double.NaN,
+                50 + 1950 * r.nextDouble(), r.nextBoolean() ? 360 * r.nextDouble() : 0));
+        exc.add(new Exc("vane torque", Kind.FORCE, r.nextInt(n), 3 + r.nextInt(4), Double.NaN,
+                20 + 480 * r.nextDouble(), r.nextBoolean() ? 360 * r.nextDouble() : 0));
+        if (r.nextInt(3) == 0) {
+            exc.add(new Exc("gear mesh", Kind.ORDER, -1, 11 + r.nextInt(20), Double.NaN, 0, 0));
+        }
+        return new Design(String.format(Locale.ROOT, "TL-%02d", i), names, inertia, springs,
+                hysteretic ? "" : "ratio", hysteretic ? 0 : zeta, tolerant ? 0.05 + 0.15 * r.nextDouble() : 0,
+                tolerant ? 0.02 + 0.06 * r.nextDouble() : 0, nMin, nMax, exc, false, 0, true, free);
     }
 
     /** The line for one tolerance case: stiffnesses scaled by ks, masses by ms. */
@@ -242,7 +313,7 @@ class LumpedCrossCheckTest {
         double[] gravity = new double[n];
         for (int a = 0; a < n; a++) {
             mass[a][a] = d.masses()[a] * ms;
-            gravity[a] = -d.masses()[a] * ms * GN;
+            gravity[a] = -d.masses()[a] * ms * GN; // unused for torsion
         }
         int s = d.springs().size();
         double[][] rows = new double[s][n];
@@ -287,7 +358,7 @@ class LumpedCrossCheckTest {
         }
         double zeta = d.hysteretic() ? Double.NaN : CrossCheckSupport.ratioOf(d.dampingForm(), d.dampingValue());
         return new IndependentSystem(mass, rows, k, eta, ground, 1, start, count, names, points, pStart, pCount,
-                staticRow, gravity, zeta);
+                staticRow, d.torsion() ? null : gravity, zeta);
     }
 
     /** Loads along the line: the phasor e^{iφ} at the named mass, per unit force. */
@@ -316,14 +387,17 @@ class LumpedCrossCheckTest {
     private static String specJson(Design d, String criteria) {
         StringBuilder masses = new StringBuilder();
         for (int a = 0; a < d.masses().length; a++) {
-            masses.append(a == 0 ? "" : ",\n      ").append(String.format(Locale.ROOT,
-                    "{\"name\": \"%s\", \"mass\": %s}", d.names().get(a), q(d.masses()[a], "kg")));
+            masses.append(a == 0 ? "" : ",\n      ").append(d.torsion()
+                    ? String.format(Locale.ROOT, "{\"name\": \"%s\", \"inertia\": %s}", d.names().get(a),
+                            q(d.masses()[a], "kg·m²"))
+                    : String.format(Locale.ROOT, "{\"name\": \"%s\", \"mass\": %s}", d.names().get(a),
+                            q(d.masses()[a], "kg")));
         }
         StringBuilder springs = new StringBuilder();
         for (Spring s : d.springs()) {
             springs.append(springs.isEmpty() ? "" : ",\n      ").append(String.format(Locale.ROOT,
                     "{\"name\": \"%s\", \"from\": \"%s\", \"to\": \"%s\", \"stiffness\": %s%s}", s.name(),
-                    end(d, s.from()), end(d, s.to()), q(s.k() / 1e3, "kN/m"),
+                    end(d, s.from()), end(d, s.to()), d.torsion() ? q(s.k() / 1e3, "kN·m/rad") : q(s.k() / 1e3, "kN/m"),
                     d.hysteretic() ? ", \"damping\": {\"lossFactor\": " + num(s.eta()) + "}" : ""));
         }
         String damping = d.hysteretic() ? ""
@@ -341,7 +415,7 @@ class LumpedCrossCheckTest {
                         q(e.amount() * 1e6, "g·mm"), phase);
                 case FORCE -> String.format(Locale.ROOT,
                         "{\"name\": \"%s\", \"kind\": \"force\"%s, %s, \"amplitude\": %s%s}", e.name(), at, when,
-                        q(e.amount(), "N"), phase);
+                        q(e.amount(), d.torsion() ? "N·m" : "N"), phase);
                 case BASE -> String.format(Locale.ROOT, "{\"name\": \"%s\", \"kind\": \"base-motion\", %s, %s%s}",
                         e.name(), when, switch (e.measure()) {
                             case 0 -> "\"displacement\": " + q(e.amount() * 1e6, "µm");
@@ -360,7 +434,7 @@ class LumpedCrossCheckTest {
                   "format": "resonance-gate/1",
                   "id": "%s",
                   "title": "Harbourside district cooling plant, chain cross-check",
-                  "model": {"kind": "lumped", "motion": "translation",
+                  "model": {"kind": "lumped", "motion": "%s",%s
                     "masses": [
                       %s
                     ],
@@ -375,7 +449,8 @@ class LumpedCrossCheckTest {
                     %s
                   ]%s
                 }
-                """, d.id(), masses, springs, damping, speed, exc, criteria, tolerances);
+                """, d.id(), d.torsion() ? "torsion" : "translation", d.free() ? " \"free\": true," : "", masses, springs,
+                damping, speed, exc, criteria, tolerances);
     }
 
     private static String end(Design d, int mass) {

@@ -88,10 +88,14 @@ final class WorstCase {
         probes.forEach(p -> worst.put(p.id(), 0.0));
         List<double[]> deflections = new ArrayList<>();
         for (IndependentSystem sys : cases) {
-            double[] defl = sys.staticDeflections();
-            deflections.add(Arrays.stream(defl).map(Math::abs).toArray());
+            if (sys.gravityLoad != null) {
+                deflections.add(Arrays.stream(sys.staticDeflections()).map(Math::abs).toArray());
+            }
             for (int r = 0; r < sys.n; r++) {
                 double fn = sys.frequencyHz(r);
+                if (fn == 0) {
+                    continue; // a free line's zero-frequency mode is left out of separation (spec-format.md)
+                }
                 for (Load load : loads) {
                     double lo = (Double.isNaN(load.order()) ? load.frequencyHz() : load.order() * nMin / 60) / fn;
                     double hi = (Double.isNaN(load.order()) ? load.frequencyHz() : load.order() * nMax / 60) / fn;
@@ -239,6 +243,9 @@ final class WorstCase {
             set.add(nMin + (nMax - nMin) * i / (GRID - 1));
         }
         for (int r = 0; r < sys.n; r++) {
+            if (sys.omega[r] == 0) {
+                continue;
+            }
             double z = Math.max(sys.modeZeta[r], 0.003);
             for (Load load : driving) {
                 if (Double.isNaN(load.order())) {
