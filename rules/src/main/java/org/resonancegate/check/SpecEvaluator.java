@@ -12,6 +12,7 @@ import org.resonancegate.criteria.Rules;
 import org.resonancegate.criteria.Ties;
 import org.resonancegate.dynamics.LinearSystem;
 import org.resonancegate.dynamics.Mode;
+import org.resonancegate.dynamics.MotionShare;
 import org.resonancegate.dynamics.SystemBuilder;
 import org.resonancegate.report.CheckResult;
 import org.resonancegate.report.CheckStatus;
@@ -37,6 +38,12 @@ public final class SpecEvaluator {
         List<ToleranceCase> cases = ToleranceCase.all(spec.tolerances());
         List<RuleContext> contexts = new ArrayList<>();
         for (ToleranceCase c : cases) {
+            int same = firstWithScale(cases, c);
+            if (same < contexts.size()) {
+                // A tolerance given for stiffness only makes corners twice over; one model serves both.
+                contexts.add(contexts.get(same));
+                continue;
+            }
             try {
                 LinearSystem system = SystemBuilder.build(spec.model(), c.scale());
                 requireFiniteModes(system, c);
@@ -50,7 +57,11 @@ public final class SpecEvaluator {
         }
         List<ModeResult> modes = new ArrayList<>();
         for (Mode m : contexts.get(0).system().modes()) {
-            modes.add(new ModeResult(m.index(), m.frequencyHz(), m.dampingRatio()));
+            List<ModeResult.Share> shares = new ArrayList<>();
+            for (MotionShare share : m.shares()) {
+                shares.add(new ModeResult.Share(share.motion(), share.fraction()));
+            }
+            modes.add(new ModeResult(m.index(), m.frequencyHz(), m.dampingRatio(), shares));
         }
         boolean tolerances = !spec.tolerances().isEmpty();
         List<CheckResult> checks = new ArrayList<>();
@@ -70,6 +81,9 @@ public final class SpecEvaluator {
         Finding worst = null;
         int worstCase = 0;
         for (int i = 0; i < cases.size(); i++) {
+            if (firstWithScale(cases, cases.get(i)) < i) {
+                continue; // the same model as an earlier case gives the same finding, and the first of equals governs
+            }
             Finding f = Rules.evaluate(criterion, contexts.get(i));
             if (!Double.isFinite(f.value()) || !Double.isFinite(f.badness()) || !Double.isFinite(f.limit())) {
                 throw new CriterionProblem("numerical trouble: the value came out as " + f.value() + " ("
@@ -91,6 +105,16 @@ public final class SpecEvaluator {
         return new CheckResult(criterion.id(), criterion.rule().key(), criterion.severity(), verdict.status(),
                 worst.value(), worst.limit(), worst.unit(), speed, worst.frequencyHz(), message,
                 criterion.location(), governing, verdict.note());
+    }
+
+    /** The first case with the same model scale as {@code c}. */
+    private static int firstWithScale(List<ToleranceCase> cases, ToleranceCase c) {
+        for (int i = 0; i < cases.size(); i++) {
+            if (cases.get(i).scale().equals(c.scale())) {
+                return i;
+            }
+        }
+        throw new IllegalStateException("case not listed");
     }
 
     private static void requireFiniteModes(LinearSystem system, ToleranceCase c) {

@@ -48,6 +48,29 @@ final class Display {
         return sig(fraction * 100, 3) + " %";
     }
 
+    /**
+     * "mode 3 (rocking about y 71 %, x 27 %) at 8.4 Hz"; a mode of a one-degree-of-freedom model
+     * has no shares and reads "mode 1 at 5.74 Hz".
+     */
+    static String mode(org.resonancegate.dynamics.Mode m) {
+        StringBuilder b = new StringBuilder("mode ").append(m.index());
+        if (!m.shares().isEmpty()) {
+            b.append(" (");
+            for (int i = 0; i < m.shares().size(); i++) {
+                org.resonancegate.dynamics.MotionShare s = m.shares().get(i);
+                b.append(i > 0 ? ", " : "").append(s.reading()).append(' ')
+                        .append(Math.round(s.fraction() * 100)).append(" %");
+            }
+            b.append(')');
+        }
+        return b.append(" at ").append(hz(m.angularFrequency())).toString();
+    }
+
+    /** " in spring 'pads'" style suffix; nothing for an empty label. */
+    static String named(String prefix, String label) {
+        return label.isEmpty() ? "" : prefix + label;
+    }
+
     static String speedAndFrequency(double speed, double omega) {
         return "at " + rpm(speed) + " (" + hz(omega) + ")";
     }

@@ -1,48 +1,77 @@
 package org.resonancegate.criteria;
 
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.Drives;
 import org.resonancegate.dynamics.Load;
+import org.resonancegate.dynamics.Probe;
 import org.resonancegate.dynamics.Response;
 import org.resonancegate.spec.Criterion;
 import org.resonancegate.spec.Excitation;
 import org.resonancegate.spec.ExcitationFrequency;
+import org.resonancegate.spec.ResponsePoint;
 
 /**
  * isolation: for each force, unbalance or base-motion excitation alone, the transmissibility T
- * (|force into the ground| / |applied force|, or |response| / |ground motion|) stays at or below
- * the limit; the worst excitation over the speed range counts. Order-only excitations carry no
- * load and are left out. With {@code minEfficiency} the value is 1 − T.
+ * stays at or below the limit; the worst excitation over the speed range counts. For a force,
+ * T = the peak over a cycle of the total ground-force vector / the applied amplitude (for a
+ * rotating force on a body, the major semi-axis of the ellipse the ground force traces); for base
+ * motion, T = the response at {@code at} (default: the mass, or the centre of gravity) along the
+ * motion's direction / the ground amplitude. Order-only excitations carry no load and are left
+ * out. With {@code minEfficiency} the value is 1 − T.
  */
 final class IsolationRule {
 
     private IsolationRule() {
     }
 
-    /**
-     * T of one excitation at its frequency. The system is linear, so T is taken from a unit load
-     * of the same kind: an unbalance at standstill (zero force) still has its limit T = 1 instead
-     * of 0/0. A rigid body will need the peak of the ground-force vector over a cycle here.
-     */
-    static double transmissibility(Drive d, RuleContext ctx) {
-        if (d.load() instanceof Load.Force) {
-            Response r = ctx.system().respond(new Load.Force(Complex.ONE), d.omega());
-            double worst = 0;
-            for (Complex g : r.groundForces()) {
-                worst = Math.max(worst, g.abs());
-            }
-            return worst;
-        }
-        // Base motion: the response point (the mass) along the motion's direction.
-        return ctx.system().respond(new Load.GroundMotion(Complex.ONE), d.omega()).displacements().get(0).abs();
+    /** T and where it is read (the response point for base motion; empty for a force). */
+    private record Reading(double t, String where) {
     }
 
-    /** T of one excitation at running speed {@code speed}. */
-    private static double transmissibilityAt(Excitation e, RuleContext ctx, double speed) {
-        Drive d = Drives.at(e, speed, ctx.operation()).orElseThrow();
-        return CriterionProblem.requireFinite(transmissibility(d, ctx), "transmissibility of '" + e.name() + "'");
+    /**
+     * T of one excitation at its frequency. The system is linear, so T is the ratio of the
+     * response to the load it answers; a load of zero amplitude (an unbalance at standstill) is
+     * replaced by a unit load of the same pattern so that T is still defined.
+     */
+    private static Reading transmissibility(Drive d, Response r, RuleContext ctx, Optional<ResponsePoint> at) {
+        double amplitude = d.load().amplitude().abs();
+        if (!(amplitude > 0)) {
+            Load unit = d.load() instanceof Load.Force f ? new Load.Force(Complex.ONE, f.placement())
+                    : new Load.GroundMotion(Complex.ONE, ((Load.GroundMotion) d.load()).direction());
+            r = ctx.system().respond(unit, d.omega());
+            amplitude = 1;
+        }
+        if (d.load() instanceof Load.Force) {
+            return new Reading(r.groundForces().peakOverCycle() / amplitude, "");
+        }
+        Load.GroundMotion g = (Load.GroundMotion) d.load();
+        double worst = -1;
+        String where = "";
+        for (Probe p : ctx.system().probesAlong(at, g.direction())) {
+            double t = p.of(r).abs() / amplitude;
+            if (t > worst && !Ties.same(t, worst)) {
+                worst = t;
+                where = p.label();
+            }
+        }
+        return new Reading(worst, where);
+    }
+
+    /** T of one excitation at running speed {@code speed}, from the responses the context shares. */
+    private static Reading transmissibilityAt(Excitation e, RuleContext ctx, double speed, Optional<ResponsePoint> at) {
+        for (RuleContext.Driven d : ctx.respondAt(speed)) {
+            if (d.drive().source() == e) {
+                Reading reading = transmissibility(d.drive(), d.response(), ctx, at);
+                if (!Double.isFinite(reading.t())) {
+                    CriterionProblem.requireFinite(reading.t(), "transmissibility of '" + e.name() + "'");
+                }
+                return reading;
+            }
+        }
+        throw new IllegalStateException("excitation '" + e.name() + "' carries no load");
     }
 
     static Finding evaluate(Criterion.Isolation c, RuleContext ctx) {
@@ -60,20 +89,21 @@ final class IsolationRule {
             }
             boolean follows = e.frequency() instanceof ExcitationFrequency.Order;
             SpeedSweep.Peak p = ctx.fixedSpeed() || !follows
-                    ? new SpeedSweep.Peak(ctx.minSpeed(), transmissibilityAt(e, ctx, ctx.minSpeed()))
-                    : SpeedSweep.maximise(s -> transmissibilityAt(e, ctx, s), ctx.minSpeed(), ctx.maxSpeed(),
-                    ctx.specialSpeeds(), "transmissibility of '" + e.name() + "'");
+                    ? new SpeedSweep.Peak(ctx.minSpeed(), transmissibilityAt(e, ctx, ctx.minSpeed(), c.at()).t())
+                    : SpeedSweep.maximise(s -> transmissibilityAt(e, ctx, s, c.at()).t(), ctx.minSpeed(),
+                    ctx.maxSpeed(), ctx.specialSpeeds(), "transmissibility of '" + e.name() + "'");
             if (peak == null || (p.value() > peak.value() && !Ties.same(p.value(), peak.value()))) {
                 peak = p;
                 worst = e;
             }
         }
         Drive governing = Drives.at(worst, peak.speed(), ctx.operation()).orElseThrow();
+        String point = transmissibilityAt(worst, ctx, peak.speed(), c.at()).where();
         double t = peak.value();
         OptionalDouble speedRpm = ctx.fixedSpeed() || governing.speedDependent()
                 ? OptionalDouble.of(peak.speed() * 60 / (2 * Math.PI)) : OptionalDouble.empty();
         OptionalDouble hz = OptionalDouble.of(governing.frequencyHz());
-        String where = " for '" + governing.source().name() + "' "
+        String where = " for '" + governing.source().name() + "'" + Display.named(" at ", point) + " "
                 + (speedRpm.isPresent() ? Display.speedAndFrequency(peak.speed(), governing.omega())
                 : "at " + Display.hz(governing.omega()));
         if (c.limit() instanceof Criterion.IsolationLimit.MinEfficiency e) {
@@ -99,8 +129,6 @@ final class IsolationRule {
     }
 
     static String nearest(RuleContext ctx, double omega) {
-        return ctx.nearestMode(omega)
-                .map(m -> "; nearest mode " + m.index() + " at " + Display.hz(m.angularFrequency()))
-                .orElse("");
+        return ctx.nearestMode(omega).map(m -> "; nearest " + Display.mode(m)).orElse("");
     }
 }

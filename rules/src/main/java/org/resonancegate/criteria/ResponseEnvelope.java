@@ -2,15 +2,20 @@ package org.resonancegate.criteria;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
-import org.resonancegate.dynamics.Response;
+import org.resonancegate.dynamics.ElementRow;
+import org.resonancegate.dynamics.Probe;
+import org.resonancegate.spec.Axis;
+import org.resonancegate.spec.ResponsePoint;
 
 /**
- * The combined response of all excitations over the speed range, for one response quantity and
- * one way of combining: component by component the excitations are combined (phasors at a shared
- * frequency; peak arithmetically or rms as root sum of squares across frequencies), the largest
- * component counts, and the worst running speed is found by {@link SpeedSweep}.
+ * The combined response of all excitations over the speed range, for one set of response
+ * components (the axes of a point, or the rows of the springs and mounts) and one way of
+ * combining: component by component the excitations are combined (phasors at a shared frequency;
+ * peak arithmetically or rms as root sum of squares across frequencies), the largest component
+ * counts, and the worst running speed is found by {@link SpeedSweep}.
  */
 final class ResponseEnvelope {
 
@@ -31,6 +36,37 @@ final class ResponseEnvelope {
     }
 
     /**
+     * The response components a criterion looks at: point probes (displacement, velocity) or
+     * element rows (force), each with the label a message uses.
+     */
+    record Channels(Quantity quantity, List<Probe> probes, int[] rows, List<String> labels) {
+
+        static Channels motion(RuleContext ctx, Quantity quantity, Optional<ResponsePoint> at) {
+            List<Probe> probes = ctx.system().probes(at);
+            return new Channels(quantity, probes, new int[0], probes.stream().map(Probe::label).toList());
+        }
+
+        static Channels forces(RuleContext ctx, Optional<Axis> axis) {
+            List<ElementRow> all = ctx.system().elementRows();
+            List<Integer> keep = new ArrayList<>();
+            List<String> labels = new ArrayList<>();
+            for (int r = 0; r < all.size(); r++) {
+                ElementRow row = all.get(r);
+                if (axis.isEmpty() || row.axis().isEmpty() || row.axis().get() == axis.get()) {
+                    keep.add(r);
+                    labels.add(row.label());
+                }
+            }
+            return new Channels(Quantity.ELEMENT_FORCE, List.of(), keep.stream().mapToInt(Integer::intValue).toArray(),
+                    labels);
+        }
+
+        int size() {
+            return quantity == Quantity.ELEMENT_FORCE ? rows.length : probes.size();
+        }
+    }
+
+    /**
      * The worst point found.
      *
      * @param speed          running speed (rad/s)
@@ -38,33 +74,120 @@ final class ResponseEnvelope {
      * @param omega          the dominant excitation frequency there (rad/s)
      * @param frequencies    how many distinct frequencies contribute
      * @param speedDependent whether any contribution moves with the running speed
+     * @param label          the governing component (point and axis, spring or mount axis); may be empty
      */
-    record Worst(double speed, double value, double omega, int frequencies, boolean speedDependent) {
+    record Worst(double speed, double value, double omega, int frequencies, boolean speedDependent, String label) {
     }
 
     private ResponseEnvelope() {
     }
 
-    static Worst worst(RuleContext ctx, Quantity quantity, Measure measure, String what) {
+    static Worst worst(RuleContext ctx, Channels channels, Measure measure, String what) {
         if (!ctx.hasDrives()) {
             throw new CriterionProblem(what + " needs a force, unbalance or base-motion excitation; "
                     + "the spec lists only order-only ones. Add one, or remove the criterion");
         }
+        if (channels.size() == 0) {
+            throw new CriterionProblem(what + ": the model has no response component of that kind to judge");
+        }
         SpeedSweep.Peak peak = ctx.fixedSpeed()
                 ? new SpeedSweep.Peak(ctx.minSpeed(), CriterionProblem.requireFinite(
-                valueAt(ctx, quantity, measure, ctx.minSpeed()), what))
-                : SpeedSweep.maximise(s -> valueAt(ctx, quantity, measure, s), ctx.minSpeed(), ctx.maxSpeed(),
+                valueAt(ctx, channels, measure, ctx.minSpeed()), what))
+                : SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s), ctx.minSpeed(), ctx.maxSpeed(),
                 ctx.specialSpeeds(), what);
-        List<Combination.Contribution> governing = governingComponent(ctx, quantity, measure, peak.speed());
+        List<List<Combination.Contribution>> all = components(ctx, channels, peak.speed());
+        int best = 0;
+        double bestValue = combine(all.get(0), measure);
+        for (int j = 1; j < all.size(); j++) {
+            double v = combine(all.get(j), measure);
+            if (v > bestValue && !Ties.same(v, bestValue)) {
+                best = j;
+                bestValue = v;
+            }
+        }
+        List<Combination.Contribution> governing = all.get(best);
         boolean moves = ctx.drivesAt(peak.speed()).stream().anyMatch(Drive::speedDependent);
         return new Worst(peak.speed(), peak.value(), Combination.dominantOmega(governing),
-                Combination.groups(governing).size(), moves);
+                Combination.groups(governing).size(), moves, channels.labels().get(best));
     }
 
-    static double valueAt(RuleContext ctx, Quantity quantity, Measure measure, double speed) {
+    /**
+     * The largest combined component at one speed, without building per-component lists: the
+     * drives are grouped by frequency once, then every component sums its phasors per group. This
+     * is the sweep's inner loop, so it stays free of allocation per component.
+     */
+    static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed) {
+        List<RuleContext.Driven> driven = ctx.respondAt(speed);
+        int drives = driven.size();
+        int[] group = new int[drives];
+        double[] groupOmega = new double[drives];
+        int groups = 0;
+        for (int d = 0; d < drives; d++) {
+            double w = driven.get(d).drive().omega();
+            int found = -1;
+            for (int g = 0; g < groups; g++) {
+                if (Ties.same(groupOmega[g], w)) {
+                    found = g;
+                    break;
+                }
+            }
+            if (found < 0) {
+                found = groups;
+                groupOmega[groups++] = w;
+            }
+            group[d] = found;
+        }
+        double[] sumRe = new double[groups];
+        double[] sumIm = new double[groups];
         double worst = 0;
-        for (List<Combination.Contribution> component : components(ctx, quantity, speed)) {
-            worst = Math.max(worst, combine(component, measure));
+        int size = channels.size();
+        for (int j = 0; j < size; j++) {
+            java.util.Arrays.fill(sumRe, 0);
+            java.util.Arrays.fill(sumIm, 0);
+            for (int d = 0; d < drives; d++) {
+                RuleContext.Driven dr = driven.get(d);
+                double re;
+                double im;
+                if (channels.quantity() == Quantity.ELEMENT_FORCE) {
+                    int row = channels.rows()[j];
+                    re = dr.response().elementForces().re(row);
+                    im = dr.response().elementForces().im(row);
+                } else {
+                    double[] g = channels.probes().get(j).gather();
+                    re = 0;
+                    im = 0;
+                    for (int k = 0; k < g.length; k++) {
+                        re += g[k] * dr.response().displacements().re(k);
+                        im += g[k] * dr.response().displacements().im(k);
+                    }
+                    if (channels.quantity() == Quantity.VELOCITY) {
+                        // v = iω·x
+                        double w = dr.drive().omega();
+                        double t = re;
+                        re = -w * im;
+                        im = w * t;
+                    }
+                }
+                if (!Double.isFinite(re) || !Double.isFinite(im)) {
+                    throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
+                            + "' at " + Display.rpm(speed) + " came out as " + re + " + " + im + "i"
+                            + "; check that mass, stiffness and damping are positive and that damping is not zero");
+                }
+                sumRe[group[d]] += re;
+                sumIm[group[d]] += im;
+            }
+            double v = 0;
+            if (measure == Measure.RMS) {
+                for (int g = 0; g < groups; g++) {
+                    v += (sumRe[g] * sumRe[g] + sumIm[g] * sumIm[g]) / 2;
+                }
+                v = Math.sqrt(v);
+            } else {
+                for (int g = 0; g < groups; g++) {
+                    v += Math.sqrt(sumRe[g] * sumRe[g] + sumIm[g] * sumIm[g]);
+                }
+            }
+            worst = Math.max(worst, measure.factor * v);
         }
         return worst;
     }
@@ -74,43 +197,28 @@ final class ResponseEnvelope {
         return measure.factor * v;
     }
 
-    private static List<Combination.Contribution> governingComponent(RuleContext ctx, Quantity quantity,
-                                                                     Measure measure, double speed) {
-        List<List<Combination.Contribution>> all = components(ctx, quantity, speed);
-        List<Combination.Contribution> best = all.get(0);
-        double bestValue = combine(best, measure);
-        for (List<Combination.Contribution> c : all) {
-            double v = combine(c, measure);
-            if (v > bestValue && !Ties.same(v, bestValue)) {
-                best = c;
-                bestValue = v;
-            }
-        }
-        return best;
-    }
-
     /** Per response component, each excitation's complex amplitude of the quantity. */
-    private static List<List<Combination.Contribution>> components(RuleContext ctx, Quantity quantity,
+    private static List<List<Combination.Contribution>> components(RuleContext ctx, Channels channels,
                                                                    double speed) {
-        List<List<Combination.Contribution>> out = new ArrayList<>();
-        for (Drive d : ctx.drivesAt(speed)) {
-            Response r = ctx.system().respond(d.load(), d.omega());
-            List<Complex> values = switch (quantity) {
-                case DISPLACEMENT -> r.displacements();
-                case VELOCITY -> r.displacements().stream().map(x -> x.multiply(new Complex(0, d.omega()))).toList();
-                case ELEMENT_FORCE -> r.elementForces();
-            };
-            for (int j = 0; j < values.size(); j++) {
-                if (out.size() <= j) {
-                    out.add(new ArrayList<>());
-                }
-                Complex v = values.get(j);
+        int size = channels.size();
+        List<List<Combination.Contribution>> out = new ArrayList<>(size);
+        for (int j = 0; j < size; j++) {
+            out.add(new ArrayList<>());
+        }
+        for (RuleContext.Driven d : ctx.respondAt(speed)) {
+            double w = d.drive().omega();
+            for (int j = 0; j < size; j++) {
+                Complex v = switch (channels.quantity()) {
+                    case DISPLACEMENT -> channels.probes().get(j).of(d.response());
+                    case VELOCITY -> channels.probes().get(j).of(d.response()).multiply(new Complex(0, w));
+                    case ELEMENT_FORCE -> d.response().elementForces().get(channels.rows()[j]);
+                };
                 if (v.isNaN() || v.isInfinite()) {
-                    throw new CriterionProblem("numerical trouble: the response to '" + d.source().name() + "' at "
-                            + Display.rpm(speed) + " came out as " + v
+                    throw new CriterionProblem("numerical trouble: the response to '" + d.drive().source().name()
+                            + "' at " + Display.rpm(speed) + " came out as " + v
                             + "; check that mass, stiffness and damping are positive and that damping is not zero");
                 }
-                out.get(j).add(new Combination.Contribution(d.omega(), v));
+                out.get(j).add(new Combination.Contribution(w, v));
             }
         }
         return out;

@@ -1,21 +1,55 @@
 package org.resonancegate.criteria;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.Drives;
 import org.resonancegate.dynamics.LinearSystem;
 import org.resonancegate.dynamics.Mode;
+import org.resonancegate.dynamics.Response;
 import org.resonancegate.spec.Excitation;
 import org.resonancegate.spec.ExcitationFrequency;
 import org.resonancegate.spec.Operation;
 
-/** One model case to judge: the system, its speed range and its excitations. */
-public record RuleContext(LinearSystem system, Operation operation, List<Excitation> excitations) {
+/**
+ * One model case to judge: the system, its speed range and its excitations. It remembers the
+ * responses it has computed at each running speed, so the criteria of one case share them (they
+ * sweep the same grid and the same resonance speeds). One context is used by one thread.
+ */
+public final class RuleContext {
 
-    public RuleContext {
-        excitations = List.copyOf(excitations);
+    /** Beyond this many remembered speeds the memory starts afresh (it only saves time). */
+    private static final int MEMO_LIMIT = 50_000;
+
+    /** One excitation's load at a speed and the system's response to it. */
+    public record Driven(Drive drive, Response response) {
+    }
+
+    private final LinearSystem system;
+    private final Operation operation;
+    private final List<Excitation> excitations;
+    private final Map<Double, List<Driven>> memo = new HashMap<>();
+    private List<Double> specialSpeeds;
+
+    public RuleContext(LinearSystem system, Operation operation, List<Excitation> excitations) {
+        this.system = system;
+        this.operation = operation;
+        this.excitations = List.copyOf(excitations);
+    }
+
+    public LinearSystem system() {
+        return system;
+    }
+
+    public Operation operation() {
+        return operation;
+    }
+
+    public List<Excitation> excitations() {
+        return excitations;
     }
 
     public double minSpeed() {
@@ -33,10 +67,31 @@ public record RuleContext(LinearSystem system, Operation operation, List<Excitat
     /** The loads of every excitation that carries one, in listing order, at running speed {@code speed}. */
     public List<Drive> drivesAt(double speed) {
         List<Drive> out = new ArrayList<>();
-        for (Excitation e : excitations) {
-            Drives.at(e, speed, operation).ifPresent(out::add);
+        for (Driven d : respondAt(speed)) {
+            out.add(d.drive());
         }
         return out;
+    }
+
+    /** Every loaded excitation at running speed {@code speed} with the response to it, in listing order. */
+    public List<Driven> respondAt(double speed) {
+        List<Driven> known = memo.get(speed);
+        if (known != null) {
+            return known;
+        }
+        List<Driven> out = new ArrayList<>();
+        for (Excitation e : excitations) {
+            Optional<Drive> d = Drives.at(e, speed, operation);
+            if (d.isPresent()) {
+                out.add(new Driven(d.get(), system.respond(d.get().load(), d.get().omega())));
+            }
+        }
+        if (memo.size() >= MEMO_LIMIT) {
+            memo.clear();
+        }
+        List<Driven> frozen = List.copyOf(out);
+        memo.put(speed, frozen);
+        return frozen;
     }
 
     /** Whether any excitation puts a load on the system (order-only ones do not). */
@@ -45,12 +100,16 @@ public record RuleContext(LinearSystem system, Operation operation, List<Excitat
     }
 
     /**
-     * Running speeds where a response peak can sit: for every mode and every order that carries a
-     * load, the resonance speed ω_r/n and the speeds of the closed-form single-mass peaks
-     * (displacement under a force β = √(1 − 2ζ²), under unbalance β = 1/√(1 − 2ζ²),
-     * transmissibility β = √(√(1 + 8ζ²) − 1)/(2ζ)). They seed the sweep; refinement does the rest.
+     * Running speeds where a response peak can sit: for every mode (zero-frequency ones give 0,
+     * outside any range) and every order that carries a load, the resonance speed ω_r/n and the
+     * speeds of the closed-form single-mass peaks (displacement under a force β = √(1 − 2ζ²), under
+     * unbalance β = 1/√(1 − 2ζ²), transmissibility β = √(√(1 + 8ζ²) − 1)/(2ζ)). They seed the sweep;
+     * refinement does the rest, so a lightly damped coupled mode is not missed between grid points.
      */
     public List<Double> specialSpeeds() {
+        if (specialSpeeds != null) {
+            return specialSpeeds;
+        }
         List<Double> out = new ArrayList<>();
         for (Excitation e : excitations) {
             if (e instanceof Excitation.OrderOnly || !(e.frequency() instanceof ExcitationFrequency.Order o)) {
@@ -72,7 +131,8 @@ public record RuleContext(LinearSystem system, Operation operation, List<Excitat
                 }
             }
         }
-        return out;
+        specialSpeeds = List.copyOf(out);
+        return specialSpeeds;
     }
 
     /** The mode nearest (in frequency ratio) to angular frequency {@code omega}, if any. */

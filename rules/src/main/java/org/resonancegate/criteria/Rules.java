@@ -14,6 +14,16 @@ public final class Rules {
      * @throws CriterionProblem when the criterion cannot be judged (numerical trouble, nothing to judge)
      */
     public static Finding evaluate(Criterion criterion, RuleContext ctx) {
+        try {
+            return dispatch(criterion, ctx);
+        } catch (IllegalArgumentException e) {
+            // The model refuses what the criterion asks of it (a point it does not have, a load it
+            // cannot carry): an error entry at the criterion, never a pass.
+            throw new CriterionProblem(e.getMessage());
+        }
+    }
+
+    private static Finding dispatch(Criterion criterion, RuleContext ctx) {
         // Criterion is sealed; Java 17 has no pattern switch, so the kinds are tested in turn.
         if (criterion instanceof Criterion.Separation s) {
             return SeparationRule.evaluate(s, ctx);

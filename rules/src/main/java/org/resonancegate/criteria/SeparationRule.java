@@ -81,7 +81,7 @@ final class SeparationRule {
     }
 
     private static String message(Approach a, double margin, boolean fails) {
-        String mode = "mode " + a.mode().index() + " at " + Display.hz(a.mode().angularFrequency());
+        String mode = Display.mode(a.mode());
         String source = "excitation '" + a.excitation().name() + "'" + describe(a.excitation());
         if (a.value() == 0) {
             String where = a.speed().isPresent() ? " at " + Display.rpm(a.speed().getAsDouble()) : "";

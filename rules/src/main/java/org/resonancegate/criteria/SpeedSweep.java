@@ -37,8 +37,11 @@ public final class SpeedSweep {
      */
     public static Peak maximise(DoubleUnaryOperator f, double lo, double hi, Collection<Double> specialSpeeds,
                                 String what) {
-        DoubleUnaryOperator checked = s -> CriterionProblem.requireFinite(f.applyAsDouble(s),
-                what + " at " + Display.rpm(s));
+        // The message is built only when needed: formatting a speed costs more than a response.
+        DoubleUnaryOperator checked = s -> {
+            double v = f.applyAsDouble(s);
+            return Double.isFinite(v) ? v : CriterionProblem.requireFinite(v, what + " at " + Display.rpm(s));
+        };
         if (!(hi > lo)) {
             return new Peak(lo, checked.applyAsDouble(lo));
         }

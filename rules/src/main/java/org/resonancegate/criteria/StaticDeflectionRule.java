@@ -19,12 +19,19 @@ final class StaticDeflectionRule {
 
     static Finding evaluate(Criterion.StaticDeflection c, RuleContext ctx) {
         List<Double> deflections = ctx.system().staticDeflections();
+        if (deflections.isEmpty()) {
+            throw new CriterionProblem("static-deflection does not apply to this model (no gravity along a torsion line)");
+        }
+        List<String> labels = ctx.system().elementLabels();
+        String worstLabel = "";
         double worstBadness = Double.NEGATIVE_INFINITY;
         double worstValue = Double.NaN;
         Quantity worstBound = null;
         boolean worstIsMin = false;
-        for (double d : deflections) {
-            CriterionProblem.requireFinite(d, "static deflection");
+        for (int i = 0; i < deflections.size(); i++) {
+            double d = deflections.get(i);
+            String label = i < labels.size() ? labels.get(i) : "";
+            CriterionProblem.requireFinite(d, "static deflection" + Display.named(" of ", label));
             if (c.min().isPresent()) {
                 double b = Finding.belowBound(d, c.min().get().si());
                 if (b > worstBadness) {
@@ -32,6 +39,7 @@ final class StaticDeflectionRule {
                     worstValue = d;
                     worstBound = c.min().get();
                     worstIsMin = true;
+                    worstLabel = label;
                 }
             }
             if (c.max().isPresent()) {
@@ -41,6 +49,7 @@ final class StaticDeflectionRule {
                     worstValue = d;
                     worstBound = c.max().get();
                     worstIsMin = false;
+                    worstLabel = label;
                 }
             }
         }
@@ -59,7 +68,7 @@ final class StaticDeflectionRule {
         Optional<String> range = c.min().isPresent() && c.max().isPresent()
                 ? Optional.of(" (allowed " + uu.format(c.min().get().si()) + " to " + uu.format(c.max().get().si()) + ")")
                 : Optional.empty();
-        String message = "static deflection " + uu.format(worstValue) + verdict + range.orElse("");
+        String message = "static deflection" + Display.named(" of ", worstLabel) + " " + uu.format(worstValue) + verdict + range.orElse("");
         return new Finding(worstValue, worstBound.si(), "m", OptionalDouble.empty(), OptionalDouble.empty(),
                 worstBadness, message);
     }

@@ -31,11 +31,11 @@ public final class Drives {
         Complex phase = Complex.I.multiply(excitation.phase()).exp();
         if (excitation instanceof Excitation.Unbalance u) {
             double unbalance = unbalance(u, operation);
-            return Optional.of(new Drive(u, omega, new Load.Force(phase.multiply(unbalance * omega * omega)), true));
+            return Optional.of(new Drive(u, omega, new Load.Force(phase.multiply(unbalance * omega * omega), u.placement()), true));
         } else if (excitation instanceof Excitation.Force f) {
-            return Optional.of(new Drive(f, omega, new Load.Force(phase.multiply(f.amplitude().si())), follows));
+            return Optional.of(new Drive(f, omega, new Load.Force(phase.multiply(f.amplitude().si()), f.placement()), follows));
         } else if (excitation instanceof Excitation.BaseMotion b) {
-            return Optional.of(new Drive(b, omega, new Load.GroundMotion(groundDisplacement(b, omega)), follows));
+            return Optional.of(new Drive(b, omega, new Load.GroundMotion(groundDisplacement(b, omega), b.direction()), follows));
         }
         return Optional.empty(); // Excitation.OrderOnly
     }

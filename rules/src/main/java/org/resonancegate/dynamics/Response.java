@@ -1,23 +1,15 @@
 package org.resonancegate.dynamics;
 
-import java.util.List;
-import org.apache.commons.math3.complex.Complex;
-
 /**
  * The steady-state complex response of a linear system to one {@link Load} at one angular
- * frequency. Each list holds one complex amplitude per component; criteria combine excitations
- * component by component and then take the largest, so a model with several points, axes or
- * springs only has to fill longer lists.
+ * frequency (each quantity is Re(A·e^{iωt})).
  *
- * @param displacements absolute displacement amplitudes (m) of the response points
- * @param elementForces  dynamic force (elastic plus damping) through each spring or mount (N)
- * @param groundForces   force into the ground (N), per component
+ * @param displacements absolute amplitudes of the degrees of freedom (single mass, chain: each mass
+ *                      along the line; rigid body: x, y, z of the centre of gravity and rotations
+ *                      about x, y, z); a {@link Probe} turns them into the motion of a point
+ * @param elementForces dynamic force (elastic plus damping) in each element row: one per spring,
+ *                      three (x, y, z) per mount, in {@link LinearSystem#elementRows()} order
+ * @param groundForces  the total force into the ground: one component along a line, x, y, z for a body
  */
-public record Response(List<Complex> displacements, List<Complex> elementForces, List<Complex> groundForces) {
-
-    public Response {
-        displacements = List.copyOf(displacements);
-        elementForces = List.copyOf(elementForces);
-        groundForces = List.copyOf(groundForces);
-    }
+public record Response(Phasors displacements, Phasors elementForces, Phasors groundForces) {
 }

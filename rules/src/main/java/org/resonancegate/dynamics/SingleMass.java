@@ -1,8 +1,11 @@
 package org.resonancegate.dynamics;
 
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
+import org.resonancegate.spec.Direction;
+import org.resonancegate.spec.ResponsePoint;
 
 /**
  * One mass on one spring with a viscous dashpot in parallel, solved in closed form.
@@ -14,6 +17,9 @@ import org.apache.commons.math3.complex.Complex;
  * @param dashpot   c in N·s/m
  */
 public record SingleMass(double mass, double stiffness, double dashpot) implements LinearSystem {
+
+    private static final List<Probe> THE_MASS = List.of(new Probe("", new double[] {1}));
+    private static final List<ElementRow> THE_SPRING = List.of(new ElementRow(0, Optional.empty(), ""));
 
     public SingleMass {
         if (!(mass > 0) || !(stiffness > 0) || !(dashpot >= 0)
@@ -45,6 +51,26 @@ public record SingleMass(double mass, double stiffness, double dashpot) implemen
     }
 
     @Override
+    public List<String> elementLabels() {
+        return List.of("");
+    }
+
+    @Override
+    public List<ElementRow> elementRows() {
+        return THE_SPRING;
+    }
+
+    @Override
+    public List<Probe> probes(Optional<ResponsePoint> at) {
+        return THE_MASS;
+    }
+
+    @Override
+    public List<Probe> probesAlong(Optional<ResponsePoint> at, Direction direction) {
+        return THE_MASS;
+    }
+
+    @Override
     public Response respond(Load load, double omega) {
         Complex springAndDashpot = new Complex(stiffness, omega * dashpot);
         Complex dynamicStiffness = new Complex(stiffness - mass * omega * omega, omega * dashpot);
@@ -60,6 +86,6 @@ public record SingleMass(double mass, double stiffness, double dashpot) implemen
             relative = x.subtract(y);
         }
         Complex springForce = springAndDashpot.multiply(relative);
-        return new Response(List.of(x), List.of(springForce), List.of(springForce));
+        return new Response(Phasors.of(x), Phasors.of(springForce), Phasors.of(springForce));
     }
 }

@@ -1,17 +1,26 @@
 package org.resonancegate.dynamics;
 
+import java.util.OptionalDouble;
 import org.resonancegate.spec.Damping;
 import org.resonancegate.spec.Model;
 import org.resonancegate.spec.Stiffness;
 
-/** Builds the {@link LinearSystem} a spec's model stands for, at one tolerance case. */
+/**
+ * Builds the {@link LinearSystem} a spec's model stands for, at one tolerance case: every
+ * stiffness × s_k, every mass and inertia × s_m; damping ratios and loss factors are kept,
+ * dashpot coefficients are not scaled.
+ */
 public final class SystemBuilder {
 
     private SystemBuilder() {
     }
 
     public static LinearSystem build(Model model, ModelScale scale) {
-        // Model is sealed; further kinds join here as further branches.
+        if (model instanceof Model.Lumped lumped) {
+            return new LumpedLine(lumped, scale, modalRatio(lumped.damping()));
+        } else if (model instanceof Model.RigidBody body) {
+            return new RigidBody6(body, scale, modalRatio(body.damping()));
+        }
         Model.Single single = (Model.Single) model;
         double nominalMass = single.mass().si();
         // The spring is resolved at the nominal mass and then scaled like any stiffness: a
@@ -26,6 +35,11 @@ public final class SystemBuilder {
             c = DampingRatios.coefficientFor(DampingRatios.ratioOf(single.damping()), k, m);
         }
         return new SingleMass(m, k, c);
+    }
+
+    /** A model-level damping as a modal ratio; empty when the elements carry the damping. */
+    private static OptionalDouble modalRatio(java.util.Optional<Damping> damping) {
+        return damping.isPresent() ? OptionalDouble.of(DampingRatios.ratioOf(damping.get())) : OptionalDouble.empty();
     }
 
     /** k from its three written forms: direct; δ → k = m·gn/δ; f → k = m·(2πf)². */

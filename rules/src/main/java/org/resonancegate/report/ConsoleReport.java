@@ -51,15 +51,12 @@ public final class ConsoleReport {
             case PASS -> {
                 // passing criteria are counted in the table, not listed
             }
-            case FAIL -> lines.add(new ConsoleLine(ConsoleLevel.ERROR, head + check.message() + check.waiver()
-                    .filter(w -> !w.valid())
-                    .map(w -> " (waiver expired " + w.expires() + ": " + w.reason() + ")")
-                    .orElse("")));
+            // The engine's message already says "waived through DATE: reason" or "waiver expired
+            // on DATE"; the console adds only the level.
+            case FAIL -> lines.add(new ConsoleLine(ConsoleLevel.ERROR, head + check.message()));
             case WARNING -> lines.add(new ConsoleLine(ConsoleLevel.WARNING,
                     head + check.message() + " (severity warning: does not fail the spec)"));
-            case WAIVED -> lines.add(new ConsoleLine(ConsoleLevel.WARNING, head + check.waiver()
-                    .map(w -> "waived until " + w.expires() + " (" + w.reason() + "): ")
-                    .orElse("waived: ") + check.message()));
+            case WAIVED -> lines.add(new ConsoleLine(ConsoleLevel.WARNING, head + check.message()));
         }
     }
 

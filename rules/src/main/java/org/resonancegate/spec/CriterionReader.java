@@ -21,8 +21,10 @@ final class CriterionReader {
             "velocity", List.of("max", "measure"),
             "transmitted-force", List.of("max"),
             "static-deflection", List.of("min", "max"));
-    /** Keys that name a point in a lumped or rigid-body model; a single model has one point only. */
+    /** Keys that name a point in a lumped or rigid-body model; checked against the model by {@link CriterionFit}. */
     private static final List<String> PLACEMENT = List.of("at", "axis");
+    /** Rules that look at the response at a point ({@code at}) and, on a rigid body, along an axis. */
+    private static final List<Rule> AT_RULES = List.of(Rule.ISOLATION, Rule.DISPLACEMENT, Rule.VELOCITY);
     private static final List<String> RULES = Arrays.stream(Rule.values()).map(Rule::key).toList();
     private static final String EXAMPLE = "{\"id\": \"SEP\", \"rule\": \"separation\", \"margin\": \"20 %\"}";
 
@@ -76,10 +78,6 @@ final class CriterionReader {
             }
             return found;
         });
-        for (String placement : PLACEMENT) {
-            c.member(placement).ifPresent(m -> problems.add(m.keyLocation(), "\"" + m.key() + "\" in " + where
-                    + ": a single model needs none (it has one mass and one spring); remove it"));
-        }
         Optional<Severity> severity = c.get("severity").isPresent()
                 ? severity(c.get("severity").get(), problems)
                 : Optional.of(Severity.ERROR);
@@ -94,7 +92,15 @@ final class CriterionReader {
         if (id.isEmpty() || severity.isEmpty()) {
             return Optional.empty();
         }
-        Optional<Criterion> result = rule(rule.get(), c, id.get(), severity.get(), where, problems);
+        Optional<Optional<ResponsePoint>> point = at(c, rule.get(), where, problems);
+        Optional<Optional<Axis>> forceAxis = rule.get() == Rule.TRANSMITTED_FORCE && c.has("axis")
+                ? Geometry.axis(c.get("axis").get(), problems).map(Optional::of)
+                : Optional.of(Optional.empty());
+        if (point.isEmpty() || forceAxis.isEmpty()) {
+            return Optional.empty();
+        }
+        Optional<Criterion> result = rule(rule.get(), c, id.get(), severity.get(), where, point.get(),
+                forceAxis.get(), problems);
         return problems.count() == before ? result : Optional.empty();
     }
 
@@ -116,8 +122,61 @@ final class CriterionReader {
         return Optional.empty();
     }
 
+    /**
+     * The {@code at} of a criterion as written, before the model is known (a profile serves several
+     * specs): a mass name, or a point with an optional {@code axis}. Empty when written wrong.
+     */
+    private static Optional<Optional<ResponsePoint>> at(JsonNode.JsonObject c, Rule rule, String where,
+                                                        Problems problems) {
+        Optional<JsonNode.Member> at = c.member("at");
+        Optional<JsonNode.Member> axis = c.member("axis");
+        int before = problems.count();
+        if (!AT_RULES.contains(rule)) {
+            at.ifPresent(m -> problems.add(m.keyLocation(), "\"at\" in " + where + ": rule \"" + rule.key()
+                    + "\" " + (rule == Rule.SEPARATION ? "looks at the modes" : "holds for every spring or mount")
+                    + ", not at a point; remove it"));
+            if (rule != Rule.TRANSMITTED_FORCE) {
+                axis.ifPresent(m -> problems.add(m.keyLocation(), "\"axis\" in " + where + ": rule \"" + rule.key()
+                        + "\" takes no axis; remove it"));
+            }
+            return problems.count() == before ? Optional.of(Optional.empty()) : Optional.empty();
+        }
+        if (rule == Rule.ISOLATION) {
+            axis.ifPresent(m -> problems.add(m.keyLocation(), "\"axis\" in " + where + ": isolation looks along the"
+                    + " base motion's direction (or at the whole force into the ground); remove it"));
+        } else if (axis.isPresent() && at.isEmpty()) {
+            problems.add(axis.get().keyLocation(), "\"axis\" in " + where + " goes beside \"at\", the point on a rigid"
+                    + " body it looks at, such as \"at\": " + Geometry.POINT_EXAMPLE + ", \"axis\": \"z\"");
+        }
+        if (at.isEmpty()) {
+            return problems.count() == before ? Optional.of(Optional.empty()) : Optional.empty();
+        }
+        JsonNode value = at.get().value();
+        Optional<ResponsePoint> point = Optional.empty();
+        if (value instanceof JsonNode.JsonObject) {
+            Optional<Point> p = Geometry.point(value, "at", problems);
+            Optional<Optional<Axis>> a = rule == Rule.ISOLATION || axis.isEmpty() ? Optional.of(Optional.empty())
+                    : Geometry.axis(axis.get().value(), problems).map(Optional::of);
+            if (p.isPresent() && a.isPresent()) {
+                point = Optional.of(new ResponsePoint.OnBody(p.get(), a.get()));
+            }
+        } else if (value instanceof JsonNode.JsonString) {
+            if (rule != Rule.ISOLATION && axis.isPresent()) {
+                problems.add(axis.get().keyLocation(), "\"axis\" in " + where + " goes with a point on a rigid body;"
+                        + " a mass of a lumped line moves along the line only; remove it");
+            }
+            point = Fields.text(value, "at", "the name of a mass, such as \"pump\"", problems)
+                    .map(n -> new ResponsePoint.Mass(n, value.location()));
+        } else {
+            Fields.wrongType(value, "at", "a mass name or a point", "\"pump\" (lumped) or " + Geometry.POINT_EXAMPLE
+                    + " (rigid body)", problems);
+        }
+        return problems.count() == before && point.isPresent() ? Optional.of(point) : Optional.empty();
+    }
+
     private static Optional<Criterion> rule(Rule rule, JsonNode.JsonObject c, String id, Severity severity,
-                                            String where, Problems problems) {
+                                            String where, Optional<ResponsePoint> point, Optional<Axis> forceAxis,
+                                            Problems problems) {
         SourceLocation at = c.location();
         return switch (rule) {
             case SEPARATION -> Fields.required(c, "margin", where, "\"margin\": \"20 %\"", problems)
@@ -132,28 +191,29 @@ final class CriterionReader {
                             : Fields.dimensionlessIn(m.value(), m.key(), "0.9 or \"90 %\"", 0, false, 1, false,
                                     " (efficiency is 1 − T)", problems)
                             .map(d -> (Criterion.IsolationLimit) new Criterion.IsolationLimit.MinEfficiency(d)))
-                    .map(limit -> new Criterion.Isolation(id, severity, limit, at));
+                    .map(limit -> new Criterion.Isolation(id, severity, limit, point, at));
             case DISPLACEMENT -> {
                 Optional<Quantity> max = Fields.required(c, "max", where, "\"max\": \"0.2 mm\"", problems)
-                        .flatMap(n -> Fields.positive(n, "max", Dimension.LENGTH, problems));
+                        .flatMap(n -> Fields.positiveEither(n, "max", Dimension.LENGTH, Dimension.ANGLE, problems));
                 Optional<Criterion.DisplacementMeasure> measure = measure(c, Criterion.DisplacementMeasure.values(),
                         Criterion.DisplacementMeasure.PEAK, Criterion.DisplacementMeasure::key, problems);
                 yield max.isPresent() && measure.isPresent()
-                        ? Optional.of(new Criterion.Displacement(id, severity, max.get(), measure.get(), at))
+                        ? Optional.of(new Criterion.Displacement(id, severity, max.get(), measure.get(), point, at))
                         : Optional.empty();
             }
             case VELOCITY -> {
                 Optional<Quantity> max = Fields.required(c, "max", where, "\"max\": \"4.5 mm/s\"", problems)
-                        .flatMap(n -> Fields.positive(n, "max", Dimension.VELOCITY, problems));
+                        .flatMap(n -> Fields.positiveEither(n, "max", Dimension.VELOCITY, Dimension.ANGULAR_VELOCITY,
+                                problems));
                 Optional<Criterion.VelocityMeasure> measure = measure(c, Criterion.VelocityMeasure.values(),
                         Criterion.VelocityMeasure.RMS, Criterion.VelocityMeasure::key, problems);
                 yield max.isPresent() && measure.isPresent()
-                        ? Optional.of(new Criterion.Velocity(id, severity, max.get(), measure.get(), at))
+                        ? Optional.of(new Criterion.Velocity(id, severity, max.get(), measure.get(), point, at))
                         : Optional.empty();
             }
             case TRANSMITTED_FORCE -> Fields.required(c, "max", where, "\"max\": \"2 kN\"", problems)
-                    .flatMap(n -> Fields.positive(n, "max", Dimension.FORCE, problems))
-                    .map(max -> new Criterion.TransmittedForce(id, severity, max, at));
+                    .flatMap(n -> Fields.positiveEither(n, "max", Dimension.FORCE, Dimension.TORQUE, problems))
+                    .map(max -> new Criterion.TransmittedForce(id, severity, max, forceAxis, at));
             case STATIC_DEFLECTION -> staticDeflection(c, id, severity, where, problems);
         };
     }

@@ -11,7 +11,7 @@ import java.util.regex.Pattern;
 import org.resonancegate.units.Dimension;
 import org.resonancegate.units.Suggestions;
 
-/** Reads the {@code excitations} list of a spec for a {@code single} model. */
+/** Reads the {@code excitations} list of a spec; where each acts depends on the model ({@link ModelShape}). */
 final class ExcitationReader {
 
     static final List<String> KINDS = List.of("unbalance", "force", "base-motion", "order");
@@ -30,7 +30,7 @@ final class ExcitationReader {
     private ExcitationReader() {
     }
 
-    static Optional<List<Excitation>> read(JsonNode node, Problems problems) {
+    static Optional<List<Excitation>> read(JsonNode node, ModelShape shape, Problems problems) {
         Optional<JsonNode.JsonArray> array = Fields.array(node, "excitations", "[" + EXAMPLE + "]", problems);
         if (array.isEmpty()) {
             return Optional.empty();
@@ -43,7 +43,7 @@ final class ExcitationReader {
         List<Excitation> excitations = new ArrayList<>();
         Map<String, SourceLocation> names = new HashMap<>();
         for (JsonNode item : array.get().items()) {
-            Optional<Excitation> e = readOne(item, problems);
+            Optional<Excitation> e = readOne(item, shape, problems);
             e.ifPresent(excitations::add);
             e.ifPresent(x -> {
                 SourceLocation first = names.putIfAbsent(x.name(), x.location());
@@ -56,7 +56,7 @@ final class ExcitationReader {
         return problems.count() == before ? Optional.of(excitations) : Optional.empty();
     }
 
-    private static Optional<Excitation> readOne(JsonNode node, Problems problems) {
+    private static Optional<Excitation> readOne(JsonNode node, ModelShape shape, Problems problems) {
         Optional<JsonNode.JsonObject> object = Fields.object(node, "excitations", EXAMPLE, problems);
         if (object.isEmpty()) {
             return Optional.empty();
@@ -75,13 +75,10 @@ final class ExcitationReader {
             problems.add(e.get("kind").orElseThrow().location(), message.toString());
             kind = Optional.empty();
         }
-        for (String placement : PLACEMENT) {
-            e.member(placement).ifPresent(m -> problems.add(m.keyLocation(), "\"" + m.key() + "\" in " + where
-                    + ": a single model needs none (the excitation acts on its one mass, along the spring); remove it"));
-        }
         if (kind.isEmpty()) {
             return Optional.empty();
         }
+        Optional<Placement> placement = PlacementReader.excitation(e, kind.get(), where, shape, problems);
         List<String> accepted = new ArrayList<>(COMMON);
         accepted.addAll(KEYS.get(kind.get()));
         JsonNode.JsonObject withoutPlacement = new JsonNode.JsonObject(
@@ -90,11 +87,22 @@ final class ExcitationReader {
         double phase = e.get("phase").flatMap(p -> Fields.quantity(p, "phase", Dimension.ANGLE, problems))
                 .map(Quantity::si).orElse(0.0);
         Optional<Excitation> result = switch (kind.get()) {
-            case "unbalance" -> unbalance(e, name, phase, where, problems);
-            case "force" -> force(e, name, phase, where, problems);
-            case "base-motion" -> baseMotion(e, name, phase, where, problems);
+            case "unbalance" -> unbalance(e, name, phase, where, problems)
+                    .flatMap(u -> placement.map(p -> new Excitation.Unbalance(u.name(), u.phase(), u.frequency(),
+                            u.amount(), p, u.location())))
+                    .map(x -> (Excitation) x);
+            case "force" -> force(e, name, phase, where, shape, problems)
+                    .flatMap(f -> placement.map(p -> new Excitation.Force(f.name(), f.phase(), f.frequency(),
+                            f.amplitude(), p, f.location())))
+                    .map(x -> (Excitation) x);
+            case "base-motion" -> baseMotion(e, name, phase, where, problems)
+                    .flatMap(b -> placement.flatMap(p -> PlacementReader.baseDirection(e, where, shape, problems))
+                            .map(d -> new Excitation.BaseMotion(b.name(), b.phase(), b.frequency(), b.measure(),
+                                    b.amplitude(), d, b.location())))
+                    .map(x -> (Excitation) x);
             case "order" -> Fields.required(e, "order", where, "\"order\": 2", problems)
                     .flatMap(n -> order(n, problems))
+                    .filter(o -> placement.isPresent())
                     .flatMap(o -> name.map(n -> new Excitation.OrderOnly(n, phase, o, e.location())));
             default -> throw new IllegalStateException(kind.get());
         };
@@ -112,7 +120,7 @@ final class ExcitationReader {
         return n.map(v -> new ExcitationFrequency.Order(v, node.location()));
     }
 
-    private static Optional<Excitation> unbalance(JsonNode.JsonObject e, Optional<String> name, double phase,
+    private static Optional<Excitation.Unbalance> unbalance(JsonNode.JsonObject e, Optional<String> name, double phase,
                                                   String where, Problems problems) {
         Optional<ExcitationFrequency.Order> order = e.get("order").isPresent()
                 ? order(e.get("order").get(), problems)
@@ -177,18 +185,24 @@ final class ExcitationReader {
         return Fields.positive(value, "frequency", Dimension.FREQUENCY, problems).map(ExcitationFrequency.Fixed::new);
     }
 
-    private static Optional<Excitation> force(JsonNode.JsonObject e, Optional<String> name, double phase,
-                                              String where, Problems problems) {
+    /** A force, or in torsion a torque (N·m) on an inertia. */
+    private static Optional<Excitation.Force> force(JsonNode.JsonObject e, Optional<String> name, double phase,
+                                                    String where, ModelShape shape, Problems problems) {
+        boolean torsion = shape.torsion();
+        // A line whose motion is unreadable has its own diagnostic; either unit is taken here.
+        boolean either = shape.kind() == ModelShape.Kind.LUMPED && shape.motion().isEmpty();
         Optional<ExcitationFrequency> frequency = frequency(e, where, problems);
-        Optional<Quantity> amplitude = Fields.required(e, "amplitude", where, "\"amplitude\": \"500 N\"", problems)
-                .flatMap(n -> Fields.positive(n, "amplitude", Dimension.FORCE, problems));
+        Optional<Quantity> amplitude = Fields.required(e, "amplitude", where,
+                        torsion ? "\"amplitude\": \"120 N·m\" (a torque, in torsion)" : "\"amplitude\": \"500 N\"", problems)
+                .flatMap(n -> either ? Fields.positiveEither(n, "amplitude", Dimension.FORCE, Dimension.TORQUE, problems)
+                        : Fields.positive(n, "amplitude", torsion ? Dimension.TORQUE : Dimension.FORCE, problems));
         if (name.isEmpty() || frequency.isEmpty() || amplitude.isEmpty()) {
             return Optional.empty();
         }
         return Optional.of(new Excitation.Force(name.get(), phase, frequency.get(), amplitude.get(), e.location()));
     }
 
-    private static Optional<Excitation> baseMotion(JsonNode.JsonObject e, Optional<String> name, double phase,
+    private static Optional<Excitation.BaseMotion> baseMotion(JsonNode.JsonObject e, Optional<String> name, double phase,
                                                    String where, Problems problems) {
         Optional<ExcitationFrequency> frequency = frequency(e, where, problems);
         Optional<JsonNode.Member> which = Fields.exactlyOne(e, List.of("displacement", "velocity", "acceleration"),

@@ -138,6 +138,21 @@ final class Fields {
         return q;
     }
 
+    /**
+     * A positive quantity of {@code primary} dimension, or of {@code alternative} when the text reads
+     * as that (a criterion's limit is a length on a translation line and an angle in torsion, and a
+     * profile is read before the model that uses it is known). A problem is reported against the
+     * primary dimension.
+     */
+    static Optional<Quantity> positiveEither(JsonNode node, String key, Dimension primary, Dimension alternative,
+                                             Problems problems) {
+        if (node instanceof JsonNode.JsonString s
+                && QuantityParser.parse(s.value(), alternative, key) instanceof UnitParse.Value) {
+            return positive(node, key, alternative, problems);
+        }
+        return positive(node, key, primary, problems);
+    }
+
     /** A quantity that must not be negative (a speed). */
     static Optional<Quantity> nonNegative(JsonNode node, String key, Dimension dimension, Problems problems) {
         Optional<Quantity> q = quantity(node, key, dimension, problems);
@@ -167,6 +182,11 @@ final class Fields {
                     return Optional.empty();
                 }
                 return Optional.of(new Dimensionless(percent / 100, s.value(), node.location()));
+            }
+            if (s.value().trim().matches("[+-]?\\d+,\\d+\\s*%?")) {
+                problems.add(node.location(), "\"" + key + "\": \"" + s.value() + "\" uses a decimal comma; write the"
+                        + " decimal point as '.', such as \"" + s.value().trim().replace(',', '.') + "\"");
+                return Optional.empty();
             }
             problems.add(node.location(), "\"" + key + "\" is dimensionless: write a number or a percentage, such as "
                     + example + "; found \"" + s.value() + "\"");

@@ -6,12 +6,10 @@ import java.util.Optional;
 import org.resonancegate.units.Dimension;
 import org.resonancegate.units.Suggestions;
 
-/** Reads the {@code model} object. Format 1 of this release reads the {@code single} kind. */
+/** Reads the {@code model} object: {@code single} here, {@code lumped} and {@code rigid-body} by their readers. */
 final class ModelReader {
 
-    static final List<String> SUPPORTED_KINDS = List.of("single");
-    /** Kinds the format defines that this release does not compute yet. */
-    static final List<String> LATER_KINDS = List.of("lumped", "rigid-body");
+    static final List<String> SUPPORTED_KINDS = List.of("single", "lumped", "rigid-body");
     static final List<String> SINGLE_KEYS = List.of("kind", "mass", "stiffness", "staticDeflection",
             "naturalFrequency", "damping");
     static final List<String> STIFFNESS_FORMS = List.of("stiffness", "staticDeflection", "naturalFrequency");
@@ -35,20 +33,20 @@ final class ModelReader {
             return Optional.empty();
         }
         JsonNode kindNode = model.get("kind").orElseThrow();
-        if (LATER_KINDS.contains(kind.get())) {
-            problems.add(kindNode.location(), "model kind \"" + kind.get() + "\" is not supported yet in this version,"
-                    + " which computes \"single\" models only; \"lumped\" and \"rigid-body\" come with the next release");
-            return Optional.empty();
-        }
-        if (!SUPPORTED_KINDS.contains(kind.get())) {
-            StringBuilder message = new StringBuilder("unknown model kind \"" + kind.get() + "\"");
-            List<String> all = List.of("single", "lumped", "rigid-body");
-            Suggestions.closest(kind.get(), all).ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
-            message.append("; accepted: \"single\" (\"lumped\" and \"rigid-body\" are not supported yet in this version)");
-            problems.add(kindNode.location(), message.toString());
-            return Optional.empty();
-        }
-        return readSingle(model, problems).map(m -> m);
+        return switch (kind.get()) {
+            case "single" -> readSingle(model, problems).map(m -> m);
+            case "lumped" -> LumpedReader.read(model, problems).map(m -> m);
+            case "rigid-body" -> RigidBodyReader.read(model, problems).map(m -> m);
+            default -> {
+                StringBuilder message = new StringBuilder("unknown model kind \"" + kind.get() + "\"");
+                Suggestions.closest(kind.get(), SUPPORTED_KINDS)
+                        .ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
+                message.append("; accepted: \"single\" (one mass on one spring), \"lumped\" (masses or inertias along"
+                        + " one line) and \"rigid-body\" (a rigid machine on mounts)");
+                problems.add(kindNode.location(), message.toString());
+                yield Optional.empty();
+            }
+        };
     }
 
     private static Optional<Model.Single> readSingle(JsonNode.JsonObject model, Problems problems) {
@@ -83,7 +81,9 @@ final class ModelReader {
     /**
      * Damping must be positive: zero would claim an infinite amplitude at resonance. A
      * {@code ratio} is accepted in (0, 1) only: ζ ≥ 1 is an overdamped system, which has no
-     * resonance to speak of and almost always means a percentage was typed as a number.
+     * resonance to speak of and almost always means a percentage was typed as a number. The
+     * other ratio forms are held to the same ζ < 1 (η < 2, Q > 0.5; a log decrement is always
+     * below it).
      */
     static Optional<Damping> readDamping(JsonNode node, Problems problems) {
         Optional<JsonNode.JsonObject> object = Fields.object(node, "damping", "{\"ratio\": 0.05}", problems);
@@ -103,11 +103,12 @@ final class ModelReader {
             case "ratio" -> Fields.dimensionlessIn(value, "ratio", "0.05 or \"5 %\"", 0, false, 1, false,
                             " (a ratio of 1 or more is overdamped; 5 % is written 0.05 or \"5 %\")", problems)
                     .map(d -> new Damping.Ratio(d, at));
-            case "lossFactor" -> Fields.dimensionlessIn(value, "lossFactor", "0.1", 0, false,
-                            Double.POSITIVE_INFINITY, false, positive, problems)
+            case "lossFactor" -> Fields.dimensionlessIn(value, "lossFactor", "0.1", 0, false, 2, false,
+                            " (η = 2ζ: a loss factor of 2 or more is an overdamped system, ζ ≥ 1)", problems)
                     .map(d -> new Damping.LossFactor(d, at));
-            case "q" -> Fields.dimensionlessIn(value, "q", "10", 0, false, Double.POSITIVE_INFINITY, false,
-                            positive, problems)
+            case "q" -> Fields.dimensionlessIn(value, "q", "10", 0.5, false, Double.POSITIVE_INFINITY, false,
+                            " (Q = 1/(2ζ): a Q of 0.5 or less is an overdamped system, ζ ≥ 1; did you mean a"
+                                    + " damping ratio, {\"ratio\": ...}?)", problems)
                     .map(d -> new Damping.QualityFactor(d, at));
             case "logDecrement" -> Fields.dimensionlessIn(value, "logDecrement", "0.3", 0, false,
                             Double.POSITIVE_INFINITY, false, positive, problems)

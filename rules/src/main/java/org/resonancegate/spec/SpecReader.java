@@ -50,6 +50,7 @@ final class SpecReader {
         Optional<String> revision = root.get("revision").flatMap(n -> Fields.string(n, "revision", "\"C\"", problems));
         // "$schema" is for editors; the format says the engine ignores its value, whatever its type.
 
+        ModelShape shape = ModelShape.of(root.get("model"));
         Optional<Model> model = Fields.required(root, "model", "the spec",
                         "\"model\": {\"kind\": \"single\", \"mass\": \"1850 kg\", ...}", problems)
                 .flatMap(n -> ModelReader.read(n, problems));
@@ -58,7 +59,7 @@ final class SpecReader {
                 .flatMap(n -> operation(n, problems));
         Optional<List<Excitation>> excitations = Fields.required(root, "excitations", "the spec",
                         "\"excitations\": [{\"name\": \"impeller\", \"kind\": \"unbalance\", ...}]", problems)
-                .flatMap(n -> ExcitationReader.read(n, problems));
+                .flatMap(n -> ExcitationReader.read(n, shape, problems));
 
         Optional<JsonNode> criteriaNode = Fields.required(root, "criteria", "the spec",
                 "\"criteria\": [{\"id\": \"SEP\", \"rule\": \"separation\", \"margin\": \"20 %\"}]"
@@ -80,6 +81,12 @@ final class SpecReader {
             problems.add(criteriaNode.get().location(), "no criteria in force: \"criteria\" is empty and no profile"
                     + " supplies any; add one, such as {\"id\": \"SEP\", \"rule\": \"separation\", \"margin\": \"20 %\"}");
         }
+
+        boolean baseMotion = root.get("excitations").filter(n -> n instanceof JsonNode.JsonArray).stream()
+                .flatMap(n -> ((JsonNode.JsonArray) n).items().stream())
+                .anyMatch(e -> e instanceof JsonNode.JsonObject o && o.get("kind").orElse(null)
+                        instanceof JsonNode.JsonString k && k.value().equals("base-motion"));
+        criteria = CriterionFit.fit(criteria, shape, baseMotion, file, problems);
 
         Tolerances tolerances = root.get("tolerances").flatMap(n -> tolerances(n, problems)).orElse(Tolerances.none());
         Set<String> inForce = new HashSet<>();
@@ -113,8 +120,10 @@ final class SpecReader {
             Fields.checkKeys(range, "\"speed\"", List.of("min", "max"), problems);
             Optional<Quantity> min = Fields.required(range, "min", "\"speed\"", "\"min\": \"900 rpm\"", problems)
                     .flatMap(n -> Fields.nonNegative(n, "min", Dimension.SPEED, problems));
+            // A range may start at standstill, but a machine that never turns has nothing to
+            // judge, and a balance grade's unbalance M·G/Ω_max needs a top speed above zero.
             Optional<Quantity> max = Fields.required(range, "max", "\"speed\"", "\"max\": \"1480 rpm\"", problems)
-                    .flatMap(n -> Fields.nonNegative(n, "max", Dimension.SPEED, problems));
+                    .flatMap(n -> Fields.positive(n, "max", Dimension.SPEED, problems));
             if (min.isEmpty() || max.isEmpty()) {
                 return Optional.empty();
             }
@@ -126,7 +135,7 @@ final class SpecReader {
             }
             return Optional.of(new Operation(min.get(), max.get(), false, op.location()));
         }
-        return Fields.nonNegative(speed.get(), "speed", Dimension.SPEED, problems)
+        return Fields.positive(speed.get(), "speed", Dimension.SPEED, problems)
                 .map(s -> new Operation(s, s, true, op.location()));
     }
 

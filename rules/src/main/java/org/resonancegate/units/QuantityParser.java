@@ -64,7 +64,7 @@ public final class QuantityParser {
         }
         Optional<Unit> unit = UnitTable.find(unitText, expected);
         if (unit.isPresent()) {
-            double si = value * unit.get().factor();
+            double si = unit.get().toSi(number);
             if (Double.isInfinite(si)) {
                 return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" is too large to hold in SI");
             }

@@ -5,4 +5,17 @@ package org.resonancegate.units;
  * factor that turns a value in it into SI ({@code si = value × factor}).
  */
 public record Unit(String symbol, Dimension dimension, double factor) {
+
+    /**
+     * The value written as {@code number} (decimal text), in SI. A decimal factor (mm, µm, mm/s,
+     * MN/m, …) shifts the decimal point exactly, so "7.1 mm/s" becomes the double nearest 0.0071
+     * rather than 7.1 × 0.001, whose rounding would show as 0.0070999999999999995 in reports.
+     */
+    public double toSi(String number) {
+        int exponent = (int) Math.round(Math.log10(factor));
+        if (factor == Double.parseDouble("1e" + exponent)) {
+            return new java.math.BigDecimal(number).scaleByPowerOfTen(exponent).doubleValue();
+        }
+        return Double.parseDouble(number) * factor;
+    }
 }

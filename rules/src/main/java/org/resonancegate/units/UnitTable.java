@@ -188,6 +188,11 @@ public final class UnitTable {
 
     /** The dimension's usual unit, for examples in messages. */
     public static String usualSymbol(Dimension dimension) {
+        // Phases and angles are written in degrees far more often than in radians; an example
+        // in rad would turn a user's "90" into a wrong phase.
+        if (dimension == Dimension.ANGLE) {
+            return "deg";
+        }
         return BY_DIMENSION.get(dimension).get(0).symbol();
     }
 }

@@ -185,4 +185,17 @@ class QuantityParserTest {
             assertTrue(Double.isFinite(si("1 " + UnitTable.usualSymbol(d), d)), d::name);
         }
     }
+
+    /**
+     * SI prefixes are exact decimal factors (SI Brochure, 9th ed., table 7): a value written in a
+     * sub-multiple must come out as the double nearest the decimal number, as the user wrote it,
+     * so reports do not show 0.0045000000000000005 for "4.5 mm/s".
+     */
+    @Test
+    void decimalSubMultiplesGiveTheNearestDouble() {
+        assertEquals(0.0045, si("4.5 mm/s", Dimension.VELOCITY));
+        assertEquals(0.019, si("19 mm", Dimension.LENGTH));
+        assertEquals(2.5e-5, si("25 µm", Dimension.LENGTH));
+        assertEquals(0.0071, si("7.1 mm/s", Dimension.VELOCITY));
+    }
 }
