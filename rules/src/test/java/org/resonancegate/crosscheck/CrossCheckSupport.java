@@ -50,6 +50,14 @@ final class CrossCheckSupport {
                            String json) {
     }
 
+    /**
+     * The draw's seed: fixed, so every build judges the same specs; {@code -Dresonancegate.crosscheck.seed=N}
+     * varies it to hunt for disagreements by hand.
+     */
+    static long seed(long fixed) {
+        return fixed ^ Long.getLong("resonancegate.crosscheck.seed", 0L);
+    }
+
     /** A number in plain decimal notation with ten significant digits (no exponent, whatever the reader accepts). */
     static String num(double v) {
         return new BigDecimal(v).round(new MathContext(10)).stripTrailingZeros().toPlainString();
