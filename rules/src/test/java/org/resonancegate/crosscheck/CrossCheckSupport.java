@@ -204,6 +204,9 @@ final class CrossCheckSupport {
 
     /** Every feature string appears in at least two of the drawn specs. */
     static void assertCoverage(Map<String, SpecExpectation> bySpec, List<String> features) {
+        if (Long.getLong("resonancegate.crosscheck.seed", 0L) != 0) {
+            return; // a hand-varied draw is for hunting disagreements; the guard is for the fixed one
+        }
         for (String feature : features) {
             long n = bySpec.values().stream().filter(e -> e.json().contains(feature)).count();
             assertTrue(n >= 2, "the random draw has " + n + " specs with " + feature);
