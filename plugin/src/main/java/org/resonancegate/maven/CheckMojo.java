@@ -39,7 +39,7 @@ public class CheckMojo extends AbstractMojo {
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
     private File basedir;
 
-    /** Where the spec files live. A module without this directory has nothing to check and passes. */
+    /** Where the spec files live. */
     @Parameter(property = "resonance-gate.specDirectory", defaultValue = "${project.basedir}/src/vibration")
     private File specDirectory;
 
@@ -54,6 +54,14 @@ public class CheckMojo extends AbstractMojo {
     /** Fail the build when a spec fails or has errors; {@code false} reports the same findings and passes. */
     @Parameter(property = "resonance-gate.failOnViolation", defaultValue = "true")
     private boolean failOnViolation;
+
+    /**
+     * Fail when there is no spec to check (no spec directory, or no file matching the patterns):
+     * a mistyped path must not switch the gate off unnoticed. {@code false} for a module that
+     * declares the plugin but has no specs (yet): then it only warns.
+     */
+    @Parameter(property = "resonance-gate.requireSpecs", defaultValue = "true")
+    private boolean requireSpecs;
 
     /** Skip the check altogether (nothing is read or written). */
     @Parameter(property = "resonance-gate.skip", defaultValue = "false")
@@ -79,8 +87,9 @@ public class CheckMojo extends AbstractMojo {
         Path resultsFile = base.resolve(outputDirectory.toPath()).normalize().resolve(ResultsJson.FILE_NAME);
 
         Results results;
+        String nothing = "";
         if (!Files.exists(specs)) {
-            log.warn("resonance-gate: no spec directory " + display(base, specs) + "; nothing to check");
+            nothing = "no spec directory " + display(base, specs);
             results = new Results(List.of());
         } else if (!Files.isDirectory(specs)) {
             throw new MojoExecutionException("resonance-gate: specDirectory " + display(base, specs)
@@ -88,11 +97,14 @@ public class CheckMojo extends AbstractMojo {
         } else {
             List<Path> files = collect(specs);
             if (files.isEmpty()) {
-                log.warn("resonance-gate: no file in " + display(base, specs) + " matches includes " + includeList()
-                        + (excludeList().isEmpty() ? "" : " minus excludes " + excludeList()) + "; nothing to check");
+                nothing = "no file in " + display(base, specs) + " matches includes " + includeList()
+                        + (excludeList().isEmpty() ? "" : " minus excludes " + excludeList());
                 results = new Results(List.of());
             } else {
                 results = run(new CheckRequest(base, files, Clock.systemDefaultZone()));
+                if (results.specs().isEmpty()) {
+                    nothing = "the files in " + display(base, specs) + " are all profiles, none is a spec";
+                }
             }
         }
 
@@ -106,6 +118,14 @@ public class CheckMojo extends AbstractMojo {
             print(log, line);
         }
         log.info("resonance-gate: results written to " + display(base, resultsFile));
+        if (!nothing.isEmpty()) {
+            if (requireSpecs) {
+                throw new MojoFailureException("resonance-gate: " + nothing + "; nothing was checked. Point"
+                        + " resonance-gate.specDirectory (or includes) at the specs, or set"
+                        + " resonance-gate.requireSpecs=false for a module that has none");
+            }
+            log.warn("resonance-gate: " + nothing + "; nothing to check (requireSpecs=false)");
+        }
 
         String verdict = verdict(results);
         if (verdict.isEmpty()) {

@@ -123,11 +123,24 @@ class CheckMojoTest {
     @InjectMojo(goal = "check", pom = "pom.xml")
     @MojoParameter(name = "specDirectory", value = "${project.basedir}/src/no-such-folder")
     @MojoParameter(name = "outputDirectory", value = "${project.basedir}/target/empty")
-    void missingSpecDirectoryWarnsAndPassesWithAnEmptyRecord(CheckMojo mojo) throws Exception {
-        mojo.execute();
-        verify(mojo.getLog()).warn("resonance-gate: no spec directory src/no-such-folder; nothing to check");
+    void missingSpecDirectoryFailsSoATypoCannotSwitchTheGateOff(CheckMojo mojo) throws Exception {
+        MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
+        assertTrue(e.getMessage().contains("no spec directory src/no-such-folder; nothing was checked"), e.getMessage());
+        assertTrue(e.getMessage().contains("resonance-gate.requireSpecs=false"), e.getMessage());
         String text = Files.readString(basedir().resolve("target/empty/results.json"));
         assertEquals("{\n  \"format\": \"resonance-gate-results/1\",\n  \"specs\": []\n}\n", text);
+    }
+
+    @Test
+    @Basedir("/unit/passing")
+    @InjectMojo(goal = "check", pom = "pom.xml")
+    @MojoParameter(name = "specDirectory", value = "${project.basedir}/src/no-such-folder")
+    @MojoParameter(name = "requireSpecs", value = "false")
+    @MojoParameter(name = "outputDirectory", value = "${project.basedir}/target/empty-allowed")
+    void missingSpecDirectoryOnlyWarnsWhenSpecsAreNotRequired(CheckMojo mojo) throws Exception {
+        mojo.execute();
+        verify(mojo.getLog()).warn(
+                "resonance-gate: no spec directory src/no-such-folder; nothing to check (requireSpecs=false)");
     }
 
     @Test
@@ -166,9 +179,10 @@ class CheckMojoTest {
     @InjectMojo(goal = "check", pom = "pom.xml")
     @MojoParameter(name = "includes", value = "*.yaml")
     @MojoParameter(name = "outputDirectory", value = "${project.basedir}/target/unmatched")
-    void includesMatchingNothingWarnAndPass(CheckMojo mojo) throws Exception {
-        mojo.execute();
-        verify(mojo.getLog()).warn("resonance-gate: no file in src/vibration matches includes [*.yaml]; nothing to check");
+    void includesMatchingNothingFail(CheckMojo mojo) {
+        MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
+        assertTrue(e.getMessage().contains("no file in src/vibration matches includes [*.yaml]; nothing was checked"),
+                e.getMessage());
     }
 
     @Test

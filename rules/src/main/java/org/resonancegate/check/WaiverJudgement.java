@@ -42,20 +42,8 @@ final class WaiverJudgement {
         return !w.expires().isBefore(today);
     }
 
-    /**
-     * The waiver naming this criterion; with several, the latest-expiring (which is valid if any
-     * of them is), the first listed among equal dates.
-     */
+    /** The waiver naming this criterion (the reader refuses a second one for the same criterion). */
     private static Optional<Waiver> pick(String criterionId, List<Waiver> waivers) {
-        Waiver best = null;
-        for (Waiver w : waivers) {
-            if (!w.criterion().equals(criterionId)) {
-                continue;
-            }
-            if (best == null || w.expires().isAfter(best.expires())) {
-                best = w;
-            }
-        }
-        return Optional.ofNullable(best);
+        return waivers.stream().filter(w -> w.criterion().equals(criterionId)).findFirst();
     }
 }

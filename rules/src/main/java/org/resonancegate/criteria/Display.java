@@ -33,6 +33,27 @@ final class Display {
         return sig(x, 4);
     }
 
+    /**
+     * A running speed (rad/s) as the rpm value a report carries. The trip rpm → rad/s → rpm
+     * leaves a last-digit residue (999.9999999999999 for "1000 rpm"); twelve significant digits
+     * are far finer than any speed a spec states and remove it.
+     */
+    static double rpmValue(double speed) {
+        return twelveDigits(speed * 60 / (2 * Math.PI));
+    }
+
+    /** An angular frequency (rad/s) as the Hz value a report carries, rounded like {@link #rpmValue}. */
+    static double hzValue(double omega) {
+        return twelveDigits(omega / (2 * Math.PI));
+    }
+
+    private static double twelveDigits(double x) {
+        if (!Double.isFinite(x) || x == 0) {
+            return x;
+        }
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
+    }
+
     /** A running speed (rad/s) in rpm. */
     static String rpm(double speed) {
         return sig(speed * 60 / (2 * Math.PI)) + " rpm";

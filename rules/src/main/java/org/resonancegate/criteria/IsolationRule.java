@@ -101,8 +101,8 @@ final class IsolationRule {
         String point = transmissibilityAt(worst, ctx, peak.speed(), c.at()).where();
         double t = peak.value();
         OptionalDouble speedRpm = ctx.fixedSpeed() || governing.speedDependent()
-                ? OptionalDouble.of(peak.speed() * 60 / (2 * Math.PI)) : OptionalDouble.empty();
-        OptionalDouble hz = OptionalDouble.of(governing.frequencyHz());
+                ? OptionalDouble.of(Display.rpmValue(peak.speed())) : OptionalDouble.empty();
+        OptionalDouble hz = OptionalDouble.of(Display.hzValue(governing.omega()));
         String where = " for '" + governing.source().name() + "'" + Display.named(" at ", point) + " "
                 + (speedRpm.isPresent() ? Display.speedAndFrequency(peak.speed(), governing.omega())
                 : "at " + Display.hz(governing.omega()));

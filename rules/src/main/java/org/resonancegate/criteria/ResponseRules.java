@@ -42,8 +42,8 @@ final class ResponseRules {
         double badness = Finding.aboveBound(w.value(), limit);
         Display.UserUnit uu = Display.UserUnit.of(max, unit);
         boolean speedShown = ctx.fixedSpeed() || w.speedDependent();
-        OptionalDouble speedRpm = speedShown ? OptionalDouble.of(w.speed() * 60 / (2 * Math.PI)) : OptionalDouble.empty();
-        OptionalDouble hz = Double.isFinite(w.omega()) ? OptionalDouble.of(w.omega() / (2 * Math.PI))
+        OptionalDouble speedRpm = speedShown ? OptionalDouble.of(Display.rpmValue(w.speed())) : OptionalDouble.empty();
+        OptionalDouble hz = Double.isFinite(w.omega()) ? OptionalDouble.of(Display.hzValue(w.omega()))
                 : OptionalDouble.empty();
         String frequency = w.frequencies() > 1 ? "largest share at " + Display.hz(w.omega())
                 : Display.hz(w.omega());

@@ -45,9 +45,9 @@ final class SeparationRule {
         double margin = c.margin().value();
         double badness = margin != 0 ? (margin - worst.value()) / Math.abs(margin) : -worst.value();
         OptionalDouble speedRpm = worst.speed().isPresent()
-                ? OptionalDouble.of(worst.speed().getAsDouble() * 60 / (2 * Math.PI)) : OptionalDouble.empty();
+                ? OptionalDouble.of(Display.rpmValue(worst.speed().getAsDouble())) : OptionalDouble.empty();
         return new Finding(worst.value(), margin, "1", speedRpm,
-                OptionalDouble.of(worst.omega() / (2 * Math.PI)), badness, message(worst, margin, badness > 0));
+                OptionalDouble.of(Display.hzValue(worst.omega())), badness, message(worst, margin, badness > 0));
     }
 
     private static Approach approach(Mode mode, double wn, Excitation e, RuleContext ctx) {

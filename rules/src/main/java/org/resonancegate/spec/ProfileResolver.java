@@ -123,6 +123,12 @@ final class ProfileResolver {
             problems.add(ref.location(), "profile \"" + written + "\" is not a valid path: " + e.getReason());
             return Optional.empty();
         }
+        if (!paths.inside(candidate)) {
+            // said before looking: whether a file exists outside the project is none of its business
+            problems.add(ref.location(), "profile \"" + written + "\" lies outside the project; profiles must"
+                    + " stay inside the project's base directory, symbolic links resolved");
+            return Optional.empty();
+        }
         if (!Files.exists(candidate)) {
             problems.add(ref.location(), "profile \"" + written + "\" not found: no file at "
                     + paths.display(candidate) + " (paths are relative to the file that lists them)");
