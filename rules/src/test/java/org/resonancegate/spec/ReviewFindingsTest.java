@@ -50,4 +50,11 @@ class ReviewFindingsTest {
     void aDecimalCommaInAPercentageGetsTheHint() {
         expectOnly("\"margin\": \"20 %\"", "\"margin\": \"2,5 %\"", "\"2,5 %\"", "decimal comma", "\"2.5 %\"");
     }
+
+    /** Said as leaving the project, not as "not found": where it points is outside our business. */
+    @Test
+    void aProfilePathLeavingTheProjectIsRefusedAsSuchEvenWhenNothingIsThere() {
+        expectOnly("\"id\": \"CHW-P-02\",", "\"id\": \"CHW-P-02\", \"profiles\": [\"../../../nowhere.json\"],",
+                "\"../../../nowhere.json\"", "lies outside the project");
+    }
 }
