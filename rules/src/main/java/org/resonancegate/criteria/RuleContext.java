@@ -32,7 +32,7 @@ public final class RuleContext {
     private final Operation operation;
     private final List<Excitation> excitations;
     private final Map<Double, List<Driven>> memo = new HashMap<>();
-    private List<Double> specialSpeeds;
+    private double[] specialSpeeds;
 
     public RuleContext(LinearSystem system, Operation operation, List<Excitation> excitations) {
         this.system = system;
@@ -100,17 +100,29 @@ public final class RuleContext {
     }
 
     /**
+     * Relative offsets, in units of the mode's damping ratio, of the extra samples around each
+     * resonance speed: the half-power band of a mode is about ±ζ wide, so these points keep two
+     * neighbouring peaks of a lightly damped pair from sharing one bracket of the coarse grid.
+     */
+    private static final double[] AROUND = {-4, -2, -1, -0.5, 0.5, 1, 2, 4};
+
+    /** Damping ratio below which the points around a resonance use this width instead (undamped modes). */
+    private static final double NARROWEST = 1e-4;
+
+    /**
      * Running speeds where a response peak can sit: for every mode (zero-frequency ones give 0,
      * outside any range) and every order that carries a load, the resonance speed ω_r/n and the
      * speeds of the closed-form single-mass peaks (displacement under a force β = √(1 − 2ζ²), under
-     * unbalance β = 1/√(1 − 2ζ²), transmissibility β = √(√(1 + 8ζ²) − 1)/(2ζ)). They seed the sweep;
-     * refinement does the rest, so a lightly damped coupled mode is not missed between grid points.
+     * unbalance β = 1/√(1 − 2ζ²), transmissibility β = √(√(1 + 8ζ²) − 1)/(2ζ)), plus a few points
+     * across the mode's half-power band. They seed the sweep; refinement does the rest, so a
+     * lightly damped coupled mode is not missed between grid points.
      */
-    public List<Double> specialSpeeds() {
+    public double[] specialSpeeds() {
         if (specialSpeeds != null) {
             return specialSpeeds;
         }
-        List<Double> out = new ArrayList<>();
+        double[] orders = new double[excitations.size()];
+        int distinct = 0;
         for (Excitation e : excitations) {
             if (e instanceof Excitation.OrderOnly || !(e.frequency() instanceof ExcitationFrequency.Order o)) {
                 continue;
@@ -118,20 +130,36 @@ public final class RuleContext {
             if (o.order() <= 0) {
                 continue;
             }
-            for (Mode m : system.modes()) {
-                double base = m.angularFrequency() / o.order();
-                out.add(base);
+            boolean seen = false;
+            for (int i = 0; i < distinct; i++) {
+                seen |= orders[i] == o.order();
+            }
+            if (!seen) {
+                orders[distinct++] = o.order(); // the same order twice gives the same speeds
+            }
+        }
+        List<Mode> modes = system.modes();
+        double[] out = new double[distinct * modes.size() * (4 + AROUND.length)];
+        int count = 0;
+        for (int i = 0; i < distinct; i++) {
+            for (Mode m : modes) {
+                double base = m.angularFrequency() / orders[i];
+                out[count++] = base;
                 double z = m.dampingRatio().orElse(0);
                 if (2 * z * z < 1) {
-                    out.add(base * Math.sqrt(1 - 2 * z * z));
-                    out.add(base / Math.sqrt(1 - 2 * z * z));
+                    out[count++] = base * Math.sqrt(1 - 2 * z * z);
+                    out[count++] = base / Math.sqrt(1 - 2 * z * z);
                 }
                 if (z > 0) {
-                    out.add(base * Math.sqrt(Math.sqrt(1 + 8 * z * z) - 1) / (2 * z));
+                    out[count++] = base * Math.sqrt(Math.sqrt(1 + 8 * z * z) - 1) / (2 * z);
+                }
+                double width = Math.max(z, NARROWEST);
+                for (double k : AROUND) {
+                    out[count++] = base * (1 + k * width);
                 }
             }
         }
-        specialSpeeds = List.copyOf(out);
+        specialSpeeds = java.util.Arrays.copyOf(out, count);
         return specialSpeeds;
     }
 
