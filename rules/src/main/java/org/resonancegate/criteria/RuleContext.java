@@ -1,9 +1,8 @@
 package org.resonancegate.criteria;
 
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.Collections;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.Drives;
@@ -21,23 +20,37 @@ import org.resonancegate.spec.Operation;
  */
 public final class RuleContext {
 
-    /** Beyond this many remembered speeds the memory starts afresh (it only saves time). */
-    private static final int MEMO_LIMIT = 50_000;
-
     /** One excitation's load at a speed and the system's response to it. */
     public record Driven(Drive drive, Response response) {
+    }
+
+    /** The responses at one speed, each excitation's worked out when first asked for. */
+    private static final class AtSpeed {
+        final Driven[] byExcitation;
+        List<Driven> all;
+
+        AtSpeed(int excitations) {
+            byExcitation = new Driven[excitations];
+        }
     }
 
     private final LinearSystem system;
     private final Operation operation;
     private final List<Excitation> excitations;
-    private final Map<Double, List<Driven>> memo = new HashMap<>();
+    /** Per excitation (listing order) its prepared loads; empty for an order-only one. */
+    private final List<Optional<Drives.Prepared>> prepared;
+    private final SpeedMemo<AtSpeed> memo = new SpeedMemo<>();
     private double[] specialSpeeds;
 
     public RuleContext(LinearSystem system, Operation operation, List<Excitation> excitations) {
         this.system = system;
         this.operation = operation;
         this.excitations = List.copyOf(excitations);
+        List<Optional<Drives.Prepared>> p = new ArrayList<>();
+        for (Excitation e : this.excitations) {
+            p.add(e instanceof Excitation.OrderOnly ? Optional.empty() : Optional.of(Drives.prepare(e, operation)));
+        }
+        this.prepared = List.copyOf(p);
     }
 
     public LinearSystem system() {
@@ -75,23 +88,51 @@ public final class RuleContext {
 
     /** Every loaded excitation at running speed {@code speed} with the response to it, in listing order. */
     public List<Driven> respondAt(double speed) {
-        List<Driven> known = memo.get(speed);
-        if (known != null) {
-            return known;
+        AtSpeed at = atSpeed(speed);
+        if (at.all == null) {
+            List<Driven> out = new ArrayList<>(excitations.size());
+            for (int i = 0; i < excitations.size(); i++) {
+                if (prepared.get(i).isPresent()) {
+                    out.add(driven(at, i, speed));
+                }
+            }
+            at.all = Collections.unmodifiableList(out);
         }
-        List<Driven> out = new ArrayList<>();
-        for (Excitation e : excitations) {
-            Optional<Drive> d = Drives.at(e, speed, operation);
-            if (d.isPresent()) {
-                out.add(new Driven(d.get(), system.respond(d.get().load(), d.get().omega())));
+        return at.all;
+    }
+
+    /**
+     * One excitation's load and response at running speed {@code speed}; the others are not
+     * worked out (a criterion that judges each excitation alone refines each one's own peak).
+     *
+     * @throws IllegalArgumentException for an excitation that carries no load or is not this context's
+     */
+    public Driven respondTo(Excitation excitation, double speed) {
+        for (int i = 0; i < excitations.size(); i++) {
+            if (excitations.get(i) == excitation && prepared.get(i).isPresent()) {
+                return driven(atSpeed(speed), i, speed);
             }
         }
-        if (memo.size() >= MEMO_LIMIT) {
-            memo.clear();
+        throw new IllegalArgumentException("excitation '" + excitation.name() + "' carries no load here");
+    }
+
+    private AtSpeed atSpeed(double speed) {
+        AtSpeed at = memo.get(speed);
+        if (at == null) {
+            at = new AtSpeed(excitations.size());
+            memo.put(speed, at);
         }
-        List<Driven> frozen = List.copyOf(out);
-        memo.put(speed, frozen);
-        return frozen;
+        return at;
+    }
+
+    private Driven driven(AtSpeed at, int i, double speed) {
+        Driven d = at.byExcitation[i];
+        if (d == null) {
+            Drive drive = prepared.get(i).orElseThrow().at(speed);
+            d = new Driven(drive, system.respond(drive.load(), drive.omega()));
+            at.byExcitation[i] = d;
+        }
+        return d;
     }
 
     /** Whether any excitation puts a load on the system (order-only ones do not). */
