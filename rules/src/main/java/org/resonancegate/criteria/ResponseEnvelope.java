@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.ElementRow;
+import org.resonancegate.dynamics.Phasors;
 import org.resonancegate.dynamics.Probe;
 import org.resonancegate.spec.Axis;
 import org.resonancegate.spec.ResponsePoint;
@@ -113,17 +114,22 @@ final class ResponseEnvelope {
 
     /**
      * The largest combined component at one speed, without building per-component lists: the
-     * drives are grouped by frequency once, then every component sums its phasors per group. This
-     * is the sweep's inner loop, so it stays free of allocation per component.
+     * drives are grouped by frequency once, each drive's components are read into primitive
+     * arrays in one pass (the kind of quantity is decided once per drive, not per component),
+     * then every component sums its phasors per group. This is the sweep's inner loop.
      */
     static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed) {
         List<RuleContext.Driven> driven = ctx.respondAt(speed);
         int drives = driven.size();
+        int size = channels.size();
         int[] group = new int[drives];
         double[] groupOmega = new double[drives];
         int groups = 0;
+        double[][] re = new double[drives][size];
+        double[][] im = new double[drives][size];
         for (int d = 0; d < drives; d++) {
-            double w = driven.get(d).drive().omega();
+            RuleContext.Driven dr = driven.get(d);
+            double w = dr.drive().omega();
             int found = -1;
             for (int g = 0; g < groups; g++) {
                 if (Ties.same(groupOmega[g], w)) {
@@ -136,45 +142,17 @@ final class ResponseEnvelope {
                 groupOmega[groups++] = w;
             }
             group[d] = found;
+            read(channels, dr, re[d], im[d], speed);
         }
         double[] sumRe = new double[groups];
         double[] sumIm = new double[groups];
         double worst = 0;
-        int size = channels.size();
         for (int j = 0; j < size; j++) {
             java.util.Arrays.fill(sumRe, 0);
             java.util.Arrays.fill(sumIm, 0);
             for (int d = 0; d < drives; d++) {
-                RuleContext.Driven dr = driven.get(d);
-                double re;
-                double im;
-                if (channels.quantity() == Quantity.ELEMENT_FORCE) {
-                    int row = channels.rows()[j];
-                    re = dr.response().elementForces().re(row);
-                    im = dr.response().elementForces().im(row);
-                } else {
-                    double[] g = channels.probes().get(j).gather();
-                    re = 0;
-                    im = 0;
-                    for (int k = 0; k < g.length; k++) {
-                        re += g[k] * dr.response().displacements().re(k);
-                        im += g[k] * dr.response().displacements().im(k);
-                    }
-                    if (channels.quantity() == Quantity.VELOCITY) {
-                        // v = iω·x
-                        double w = dr.drive().omega();
-                        double t = re;
-                        re = -w * im;
-                        im = w * t;
-                    }
-                }
-                if (!Double.isFinite(re) || !Double.isFinite(im)) {
-                    throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
-                            + "' at " + Display.rpm(speed) + " came out as " + re + " + " + im + "i"
-                            + "; check that mass, stiffness and damping are positive and that damping is not zero");
-                }
-                sumRe[group[d]] += re;
-                sumIm[group[d]] += im;
+                sumRe[group[d]] += re[d][j];
+                sumIm[group[d]] += im[d][j];
             }
             double v = 0;
             if (measure == Measure.RMS) {
@@ -190,6 +168,47 @@ final class ResponseEnvelope {
             worst = Math.max(worst, measure.factor * v);
         }
         return worst;
+    }
+
+    /** One drive's complex amplitude of every component, into {@code re}, {@code im}; non-finite is refused. */
+    private static void read(Channels channels, RuleContext.Driven dr, double[] re, double[] im, double speed) {
+        int size = re.length;
+        if (channels.quantity() == Quantity.ELEMENT_FORCE) {
+            Phasors f = dr.response().elementForces();
+            int[] rows = channels.rows();
+            for (int j = 0; j < size; j++) {
+                re[j] = f.re(rows[j]);
+                im[j] = f.im(rows[j]);
+            }
+        } else {
+            Phasors q = dr.response().displacements();
+            double w = dr.drive().omega();
+            boolean velocity = channels.quantity() == Quantity.VELOCITY;
+            for (int j = 0; j < size; j++) {
+                double[] g = channels.probes().get(j).gather();
+                double r = 0;
+                double i = 0;
+                for (int k = 0; k < g.length; k++) {
+                    r += g[k] * q.re(k);
+                    i += g[k] * q.im(k);
+                }
+                if (velocity) {
+                    // v = iω·x
+                    re[j] = -w * i;
+                    im[j] = w * r;
+                } else {
+                    re[j] = r;
+                    im[j] = i;
+                }
+            }
+        }
+        for (int j = 0; j < size; j++) {
+            if (!Double.isFinite(re[j]) || !Double.isFinite(im[j])) {
+                throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
+                        + "' at " + Display.rpm(speed) + " came out as " + re[j] + " + " + im[j] + "i"
+                        + "; check that mass, stiffness and damping are positive and that damping is not zero");
+            }
+        }
     }
 
     private static double combine(List<Combination.Contribution> component, Measure measure) {
