@@ -59,6 +59,8 @@ final class MatrixModel {
     private final double[] zeta;
     final double[][] phi;
     private final double[][] rowModal;
+    /** Per ground-force component and mode, Σ over the grounded rows of k_r·(g_r·φ_m). */
+    private final double[][] groundModal;
     final List<Mode> modes;
 
     /**
@@ -108,6 +110,14 @@ final class MatrixModel {
         for (int r = 0; r < rows.length; r++) {
             for (int m = 0; m < n; m++) {
                 rowModal[r][m] = dot(rows[r].gather(), phi[m]);
+            }
+        }
+        groundModal = new double[groundComponents][n];
+        for (int r = 0; r < rows.length; r++) {
+            if (rows[r].groundComponent() >= 0) {
+                for (int m = 0; m < n; m++) {
+                    groundModal[rows[r].groundComponent()][m] += rows[r].k() * rowModal[r][m];
+                }
             }
         }
     }
@@ -213,6 +223,8 @@ final class MatrixModel {
         private final double[] shift;
         private final double yr;
         private final double yi;
+        private double[] gr;
+        private double[] gi;
 
         ModalParts(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
             this.er = er;
@@ -244,13 +256,7 @@ final class MatrixModel {
 
         @Override
         public Phasors elementForces() {
-            double[] gr = new double[n];
-            double[] gi = new double[n];
-            for (int m = 0; m < n; m++) {
-                double t = omegaN[m] > 0 ? 2 * zeta[m] * w / omegaN[m] : 0;
-                gr[m] = er[m] - t * ei[m];
-                gi[m] = ei[m] + t * er[m];
-            }
+            modalForces();
             Phasors f = new Phasors(rows.length);
             for (int r = 0; r < rows.length; r++) {
                 double[] c = rowModal[r];
@@ -267,17 +273,40 @@ final class MatrixModel {
             return f;
         }
 
+        /**
+         * The ground force straight from the modes (the rows' modal coefficients are summed per
+         * component once per model), so judging isolation does not form every mount's force.
+         */
         @Override
-        public Phasors groundForces(Phasors f) {
+        public Phasors groundForces() {
+            modalForces();
             Phasors g = new Phasors(groundComponents);
-            for (int r = 0; r < rows.length; r++) {
-                int gc = rows[r].groundComponent();
-                if (gc >= 0) {
-                    g.re[gc] += f.re[r];
-                    g.im[gc] += f.im[r];
+            for (int c = 0; c < groundComponents; c++) {
+                double[] a = groundModal[c];
+                double sr = 0;
+                double si = 0;
+                for (int m = 0; m < n; m++) {
+                    sr += a[m] * gr[m];
+                    si += a[m] * gi[m];
                 }
+                g.re[c] = sr;
+                g.im[c] = si;
             }
             return g;
+        }
+
+        /** Each mode's elastic-plus-damping amplitude η_m·(1 + i·2ζ_m·ω/ω_m), worked out once. */
+        private void modalForces() {
+            if (gr != null) {
+                return;
+            }
+            gr = new double[n];
+            gi = new double[n];
+            for (int m = 0; m < n; m++) {
+                double t = omegaN[m] > 0 ? 2 * zeta[m] * w / omegaN[m] : 0;
+                gr[m] = er[m] - t * ei[m];
+                gi[m] = ei[m] + t * er[m];
+            }
         }
     }
 

@@ -17,8 +17,7 @@ public final class Response {
 
         Phasors elementForces();
 
-        /** The ground force, given the element forces it sums. */
-        Phasors groundForces(Phasors elementForces);
+        Phasors groundForces();
     }
 
     private Parts parts;
@@ -63,7 +62,7 @@ public final class Response {
     /** The total force into the ground. */
     public Phasors groundForces() {
         if (groundForces == null) {
-            groundForces = parts.groundForces(elementForces());
+            groundForces = parts.groundForces();
         }
         return groundForces;
     }
