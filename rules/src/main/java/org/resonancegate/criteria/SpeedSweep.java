@@ -66,6 +66,9 @@ public final class SpeedSweep {
             best = better(best, new Peak(x[i], y[i]));
         }
         for (int i : localMaxima(y)) {
+            if ((i == 0 || i == x.length - 1) && x.length > 1 && fallsInward(checked, x, y, i)) {
+                continue; // the range end is the top of its bracket, and it is a sample already
+            }
             double a = x[Math.max(0, i - 1)];
             double b = x[Math.min(x.length - 1, i + 1)];
             best = better(best, refine(checked, a, b, x[i]));
@@ -95,6 +98,20 @@ public final class SpeedSweep {
             }
         }
         return Arrays.copyOf(all, kept);
+    }
+
+    /** How far inside the range, as a share of the end bracket, the slope at a range end is read. */
+    private static final double INWARD = 1e-7;
+
+    /**
+     * Whether the function falls on going inward from range end {@code i}. Refinement assumes one
+     * hump at most inside a bracket (as Brent's method does); a function that already falls at
+     * the end has its top there, so twenty-odd refinement steps can be spared for one sample.
+     */
+    private static boolean fallsInward(DoubleUnaryOperator f, double[] x, double[] y, int i) {
+        int inner = i == 0 ? 1 : i - 1;
+        double probe = x[i] + INWARD * (x[inner] - x[i]);
+        return probe != x[i] && f.applyAsDouble(probe) < y[i];
     }
 
     /** Samples not lower than their neighbours, leaving out flat stretches (nothing to refine there). */
