@@ -132,7 +132,9 @@ public final class SpeedSweep {
         if (!(b > a)) {
             return new Peak(start, f.applyAsDouble(start));
         }
-        BrentOptimizer brent = new BrentOptimizer(1e-12, 1e-14 * Math.max(Math.abs(a), Math.abs(b)));
+        // A relative 1e-10 in speed leaves the peak value exact to far below the 1e-9 tie rule
+        // (the error is second order), and spares a third of the steps 1e-12 took.
+        BrentOptimizer brent = new BrentOptimizer(1e-10, 1e-14 * Math.max(Math.abs(a), Math.abs(b)));
         try {
             UnivariatePointValuePair p = brent.optimize(new MaxEval(500),
                     new UnivariateObjectiveFunction(f::applyAsDouble), GoalType.MAXIMIZE,
