@@ -28,7 +28,7 @@ public final class SpeedSweep {
      * speed the caller passes in, with its own local points, and each local maximum of the samples
      * is refined by Brent inside its bracket.
      */
-    public static final int GRID_POINTS = 40;
+    public static final int GRID_POINTS = 32;
 
     /** The worst speed and the value there. */
     public record Peak(double speed, double value) {
