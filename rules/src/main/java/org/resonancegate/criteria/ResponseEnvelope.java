@@ -93,9 +93,9 @@ final class ResponseEnvelope {
         }
         SpeedSweep.Peak peak = ctx.fixedSpeed()
                 ? new SpeedSweep.Peak(ctx.minSpeed(), CriterionProblem.requireFinite(
-                valueAt(ctx, channels, measure, ctx.minSpeed()), what))
-                : SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s), ctx.minSpeed(), ctx.maxSpeed(),
-                ctx.specialSpeeds(), what);
+                valueAt(ctx, channels, measure, ctx.minSpeed(), new Scratch(ctx.excitations().size(), channels.size())),
+                what))
+                : sweep(ctx, channels, measure, what);
         List<List<Combination.Contribution>> all = components(ctx, channels, peak.speed());
         int best = 0;
         double bestValue = combine(all.get(0), measure);
@@ -112,21 +112,46 @@ final class ResponseEnvelope {
                 Combination.groups(governing).size(), moves, channels.labels().get(best));
     }
 
+    /** Working arrays of one sweep, reused at every speed (a sweep runs on one thread). */
+    private static final class Scratch {
+        final int[] group;
+        final double[] groupOmega;
+        final double[][] re;
+        final double[][] im;
+        final double[] sumRe;
+        final double[] sumIm;
+
+        Scratch(int drives, int size) {
+            group = new int[drives];
+            groupOmega = new double[drives];
+            re = new double[drives][size];
+            im = new double[drives][size];
+            sumRe = new double[drives];
+            sumIm = new double[drives];
+        }
+    }
+
+    private static SpeedSweep.Peak sweep(RuleContext ctx, Channels channels, Measure measure, String what) {
+        Scratch scratch = new Scratch(ctx.excitations().size(), channels.size());
+        return SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s, scratch), ctx.minSpeed(), ctx.maxSpeed(),
+                ctx.specialSpeeds(), what);
+    }
+
     /**
      * The largest combined component at one speed, without building per-component lists: the
      * drives are grouped by frequency once, each drive's components are read into primitive
      * arrays in one pass (the kind of quantity is decided once per drive, not per component),
      * then every component sums its phasors per group. This is the sweep's inner loop.
      */
-    static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed) {
+    private static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed, Scratch scratch) {
         List<RuleContext.Driven> driven = ctx.respondAt(speed);
         int drives = driven.size();
         int size = channels.size();
-        int[] group = new int[drives];
-        double[] groupOmega = new double[drives];
+        int[] group = scratch.group;
+        double[] groupOmega = scratch.groupOmega;
         int groups = 0;
-        double[][] re = new double[drives][size];
-        double[][] im = new double[drives][size];
+        double[][] re = scratch.re;
+        double[][] im = scratch.im;
         for (int d = 0; d < drives; d++) {
             RuleContext.Driven dr = driven.get(d);
             double w = dr.drive().omega();
@@ -144,12 +169,12 @@ final class ResponseEnvelope {
             group[d] = found;
             read(channels, dr, re[d], im[d], speed);
         }
-        double[] sumRe = new double[groups];
-        double[] sumIm = new double[groups];
+        double[] sumRe = scratch.sumRe;
+        double[] sumIm = scratch.sumIm;
         double worst = 0;
         for (int j = 0; j < size; j++) {
-            java.util.Arrays.fill(sumRe, 0);
-            java.util.Arrays.fill(sumIm, 0);
+            java.util.Arrays.fill(sumRe, 0, groups, 0);
+            java.util.Arrays.fill(sumIm, 0, groups, 0);
             for (int d = 0; d < drives; d++) {
                 sumRe[group[d]] += re[d][j];
                 sumIm[group[d]] += im[d][j];
@@ -172,7 +197,7 @@ final class ResponseEnvelope {
 
     /** One drive's complex amplitude of every component, into {@code re}, {@code im}; non-finite is refused. */
     private static void read(Channels channels, RuleContext.Driven dr, double[] re, double[] im, double speed) {
-        int size = re.length;
+        int size = channels.size();
         if (channels.quantity() == Quantity.ELEMENT_FORCE) {
             Phasors f = dr.response().elementForces();
             int[] rows = channels.rows();
