@@ -145,7 +145,7 @@ public final class RuleContext {
      * resonance speed: the half-power band of a mode is about ±ζ wide, so these points keep two
      * neighbouring peaks of a lightly damped pair from sharing one bracket of the coarse grid.
      */
-    private static final double[] AROUND = {-4, -2, -1, -0.5, 0.5, 1, 2, 4};
+    private static final double[] AROUND = {-3, -1, 1, 3};
 
     /** Damping ratio below which the points around a resonance use this width instead (undamped modes). */
     private static final double NARROWEST = 1e-4;
