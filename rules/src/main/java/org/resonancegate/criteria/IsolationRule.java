@@ -50,7 +50,7 @@ final class IsolationRule {
         Load.GroundMotion g = (Load.GroundMotion) d.load();
         double worst = -1;
         String where = "";
-        for (Probe p : ctx.system().probesAlong(at, g.direction())) {
+        for (Probe p : ctx.probesAlong(at, g.direction())) {
             double t = p.of(r).abs() / amplitude;
             if (t > worst && !Ties.same(t, worst)) {
                 worst = t;

@@ -40,11 +40,14 @@ final class ResponseEnvelope {
      * The response components a criterion looks at: point probes (displacement, velocity) or
      * element rows (force), each with the label a message uses.
      */
-    record Channels(Quantity quantity, List<Probe> probes, int[] rows, List<String> labels) {
+    record Channels(Quantity quantity, List<Probe> probes, double[][] gathers, int[] rows, List<String> labels) {
 
         static Channels motion(RuleContext ctx, Quantity quantity, Optional<ResponsePoint> at) {
             List<Probe> probes = ctx.system().probes(at);
-            return new Channels(quantity, probes, new int[0], probes.stream().map(Probe::label).toList());
+            // The rows as a plain array: the sweep reads them at every speed, and a list of
+            // whichever kind the model made would be a call the compiler cannot settle.
+            double[][] gathers = probes.stream().map(Probe::gather).toArray(double[][]::new);
+            return new Channels(quantity, probes, gathers, new int[0], probes.stream().map(Probe::label).toList());
         }
 
         static Channels forces(RuleContext ctx, Optional<Axis> axis) {
@@ -58,8 +61,8 @@ final class ResponseEnvelope {
                     labels.add(row.label());
                 }
             }
-            return new Channels(Quantity.ELEMENT_FORCE, List.of(), keep.stream().mapToInt(Integer::intValue).toArray(),
-                    labels);
+            return new Channels(Quantity.ELEMENT_FORCE, List.of(), new double[0][],
+                    keep.stream().mapToInt(Integer::intValue).toArray(), labels);
         }
 
         int size() {
@@ -210,7 +213,7 @@ final class ResponseEnvelope {
             double w = dr.drive().omega();
             boolean velocity = channels.quantity() == Quantity.VELOCITY;
             for (int j = 0; j < size; j++) {
-                double[] g = channels.probes().get(j).gather();
+                double[] g = channels.gathers()[j];
                 double r = 0;
                 double i = 0;
                 for (int k = 0; k < g.length; k++) {

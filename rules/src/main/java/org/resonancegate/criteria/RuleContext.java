@@ -2,16 +2,21 @@ package org.resonancegate.criteria;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.Drives;
 import org.resonancegate.dynamics.LinearSystem;
 import org.resonancegate.dynamics.Mode;
+import org.resonancegate.dynamics.Probe;
 import org.resonancegate.dynamics.Response;
+import org.resonancegate.spec.Direction;
 import org.resonancegate.spec.Excitation;
 import org.resonancegate.spec.ExcitationFrequency;
 import org.resonancegate.spec.Operation;
+import org.resonancegate.spec.ResponsePoint;
 
 /**
  * One model case to judge: the system, its speed range and its excitations. It remembers the
@@ -41,6 +46,7 @@ public final class RuleContext {
     private final List<Optional<Drives.Prepared>> prepared;
     private final SpeedMemo<AtSpeed> memo = new SpeedMemo<>();
     private double[] specialSpeeds;
+    private final Map<List<Object>, List<Probe>> probesAlong = new HashMap<>();
 
     public RuleContext(LinearSystem system, Operation operation, List<Excitation> excitations) {
         this.system = system;
@@ -133,6 +139,14 @@ public final class RuleContext {
             at.byExcitation[i] = d;
         }
         return d;
+    }
+
+    /**
+     * The system's probes at {@code at} along {@code direction}, made once: base-motion isolation
+     * reads them at every speed, and making them names the point in words each time.
+     */
+    public List<Probe> probesAlong(Optional<ResponsePoint> at, Direction direction) {
+        return probesAlong.computeIfAbsent(List.of(at, direction), k -> system.probesAlong(at, direction));
     }
 
     /** Whether any excitation puts a load on the system (order-only ones do not). */
