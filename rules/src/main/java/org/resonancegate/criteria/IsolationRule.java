@@ -50,7 +50,7 @@ final class IsolationRule {
         Load.GroundMotion g = (Load.GroundMotion) d.load();
         double worst = -1;
         String where = "";
-        for (Probe p : ctx.system().probesAlong(at, g.direction())) {
+        for (Probe p : ctx.probesAlong(at, g.direction())) {
             double t = p.of(r).abs() / amplitude;
             if (t > worst && !Ties.same(t, worst)) {
                 worst = t;
@@ -62,16 +62,13 @@ final class IsolationRule {
 
     /** T of one excitation at running speed {@code speed}, from the responses the context shares. */
     private static Reading transmissibilityAt(Excitation e, RuleContext ctx, double speed, Optional<ResponsePoint> at) {
-        for (RuleContext.Driven d : ctx.respondAt(speed)) {
-            if (d.drive().source() == e) {
-                Reading reading = transmissibility(d.drive(), d.response(), ctx, at);
-                if (!Double.isFinite(reading.t())) {
-                    CriterionProblem.requireFinite(reading.t(), "transmissibility of '" + e.name() + "'");
-                }
-                return reading;
-            }
+        // Only this excitation's response: the others' are not needed to refine its peak.
+        RuleContext.Driven d = ctx.respondTo(e, speed);
+        Reading reading = transmissibility(d.drive(), d.response(), ctx, at);
+        if (!Double.isFinite(reading.t())) {
+            CriterionProblem.requireFinite(reading.t(), "transmissibility of '" + e.name() + "'");
         }
-        throw new IllegalStateException("excitation '" + e.name() + "' carries no load");
+        return reading;
     }
 
     static Finding evaluate(Criterion.Isolation c, RuleContext ctx) {

@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.ElementRow;
+import org.resonancegate.dynamics.Phasors;
 import org.resonancegate.dynamics.Probe;
 import org.resonancegate.spec.Axis;
 import org.resonancegate.spec.ResponsePoint;
@@ -39,11 +40,14 @@ final class ResponseEnvelope {
      * The response components a criterion looks at: point probes (displacement, velocity) or
      * element rows (force), each with the label a message uses.
      */
-    record Channels(Quantity quantity, List<Probe> probes, int[] rows, List<String> labels) {
+    record Channels(Quantity quantity, List<Probe> probes, double[][] gathers, int[] rows, List<String> labels) {
 
         static Channels motion(RuleContext ctx, Quantity quantity, Optional<ResponsePoint> at) {
             List<Probe> probes = ctx.system().probes(at);
-            return new Channels(quantity, probes, new int[0], probes.stream().map(Probe::label).toList());
+            // The rows as a plain array: the sweep reads them at every speed, and a list of
+            // whichever kind the model made would be a call the compiler cannot settle.
+            double[][] gathers = probes.stream().map(Probe::gather).toArray(double[][]::new);
+            return new Channels(quantity, probes, gathers, new int[0], probes.stream().map(Probe::label).toList());
         }
 
         static Channels forces(RuleContext ctx, Optional<Axis> axis) {
@@ -57,8 +61,8 @@ final class ResponseEnvelope {
                     labels.add(row.label());
                 }
             }
-            return new Channels(Quantity.ELEMENT_FORCE, List.of(), keep.stream().mapToInt(Integer::intValue).toArray(),
-                    labels);
+            return new Channels(Quantity.ELEMENT_FORCE, List.of(), new double[0][],
+                    keep.stream().mapToInt(Integer::intValue).toArray(), labels);
         }
 
         int size() {
@@ -92,9 +96,9 @@ final class ResponseEnvelope {
         }
         SpeedSweep.Peak peak = ctx.fixedSpeed()
                 ? new SpeedSweep.Peak(ctx.minSpeed(), CriterionProblem.requireFinite(
-                valueAt(ctx, channels, measure, ctx.minSpeed()), what))
-                : SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s), ctx.minSpeed(), ctx.maxSpeed(),
-                ctx.specialSpeeds(), what);
+                valueAt(ctx, channels, measure, ctx.minSpeed(), new Scratch(ctx.excitations().size(), channels.size())),
+                what))
+                : sweep(ctx, channels, measure, what);
         List<List<Combination.Contribution>> all = components(ctx, channels, peak.speed());
         int best = 0;
         double bestValue = combine(all.get(0), measure);
@@ -111,19 +115,49 @@ final class ResponseEnvelope {
                 Combination.groups(governing).size(), moves, channels.labels().get(best));
     }
 
+    /** Working arrays of one sweep, reused at every speed (a sweep runs on one thread). */
+    private static final class Scratch {
+        final int[] group;
+        final double[] groupOmega;
+        final double[][] re;
+        final double[][] im;
+        final double[] sumRe;
+        final double[] sumIm;
+
+        Scratch(int drives, int size) {
+            group = new int[drives];
+            groupOmega = new double[drives];
+            re = new double[drives][size];
+            im = new double[drives][size];
+            sumRe = new double[drives];
+            sumIm = new double[drives];
+        }
+    }
+
+    private static SpeedSweep.Peak sweep(RuleContext ctx, Channels channels, Measure measure, String what) {
+        Scratch scratch = new Scratch(ctx.excitations().size(), channels.size());
+        return SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s, scratch), ctx.minSpeed(), ctx.maxSpeed(),
+                ctx.specialSpeeds(), what);
+    }
+
     /**
      * The largest combined component at one speed, without building per-component lists: the
-     * drives are grouped by frequency once, then every component sums its phasors per group. This
-     * is the sweep's inner loop, so it stays free of allocation per component.
+     * drives are grouped by frequency once, each drive's components are read into primitive
+     * arrays in one pass (the kind of quantity is decided once per drive, not per component),
+     * then every component sums its phasors per group. This is the sweep's inner loop.
      */
-    static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed) {
+    private static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed, Scratch scratch) {
         List<RuleContext.Driven> driven = ctx.respondAt(speed);
         int drives = driven.size();
-        int[] group = new int[drives];
-        double[] groupOmega = new double[drives];
+        int size = channels.size();
+        int[] group = scratch.group;
+        double[] groupOmega = scratch.groupOmega;
         int groups = 0;
+        double[][] re = scratch.re;
+        double[][] im = scratch.im;
         for (int d = 0; d < drives; d++) {
-            double w = driven.get(d).drive().omega();
+            RuleContext.Driven dr = driven.get(d);
+            double w = dr.drive().omega();
             int found = -1;
             for (int g = 0; g < groups; g++) {
                 if (Ties.same(groupOmega[g], w)) {
@@ -136,45 +170,17 @@ final class ResponseEnvelope {
                 groupOmega[groups++] = w;
             }
             group[d] = found;
+            read(channels, dr, re[d], im[d], speed);
         }
-        double[] sumRe = new double[groups];
-        double[] sumIm = new double[groups];
+        double[] sumRe = scratch.sumRe;
+        double[] sumIm = scratch.sumIm;
         double worst = 0;
-        int size = channels.size();
         for (int j = 0; j < size; j++) {
-            java.util.Arrays.fill(sumRe, 0);
-            java.util.Arrays.fill(sumIm, 0);
+            java.util.Arrays.fill(sumRe, 0, groups, 0);
+            java.util.Arrays.fill(sumIm, 0, groups, 0);
             for (int d = 0; d < drives; d++) {
-                RuleContext.Driven dr = driven.get(d);
-                double re;
-                double im;
-                if (channels.quantity() == Quantity.ELEMENT_FORCE) {
-                    int row = channels.rows()[j];
-                    re = dr.response().elementForces().re(row);
-                    im = dr.response().elementForces().im(row);
-                } else {
-                    double[] g = channels.probes().get(j).gather();
-                    re = 0;
-                    im = 0;
-                    for (int k = 0; k < g.length; k++) {
-                        re += g[k] * dr.response().displacements().re(k);
-                        im += g[k] * dr.response().displacements().im(k);
-                    }
-                    if (channels.quantity() == Quantity.VELOCITY) {
-                        // v = iω·x
-                        double w = dr.drive().omega();
-                        double t = re;
-                        re = -w * im;
-                        im = w * t;
-                    }
-                }
-                if (!Double.isFinite(re) || !Double.isFinite(im)) {
-                    throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
-                            + "' at " + Display.rpm(speed) + " came out as " + re + " + " + im + "i"
-                            + "; check that mass, stiffness and damping are positive and that damping is not zero");
-                }
-                sumRe[group[d]] += re;
-                sumIm[group[d]] += im;
+                sumRe[group[d]] += re[d][j];
+                sumIm[group[d]] += im[d][j];
             }
             double v = 0;
             if (measure == Measure.RMS) {
@@ -190,6 +196,47 @@ final class ResponseEnvelope {
             worst = Math.max(worst, measure.factor * v);
         }
         return worst;
+    }
+
+    /** One drive's complex amplitude of every component, into {@code re}, {@code im}; non-finite is refused. */
+    private static void read(Channels channels, RuleContext.Driven dr, double[] re, double[] im, double speed) {
+        int size = channels.size();
+        if (channels.quantity() == Quantity.ELEMENT_FORCE) {
+            Phasors f = dr.response().elementForces();
+            int[] rows = channels.rows();
+            for (int j = 0; j < size; j++) {
+                re[j] = f.re(rows[j]);
+                im[j] = f.im(rows[j]);
+            }
+        } else {
+            Phasors q = dr.response().displacements();
+            double w = dr.drive().omega();
+            boolean velocity = channels.quantity() == Quantity.VELOCITY;
+            for (int j = 0; j < size; j++) {
+                double[] g = channels.gathers()[j];
+                double r = 0;
+                double i = 0;
+                for (int k = 0; k < g.length; k++) {
+                    r += g[k] * q.re(k);
+                    i += g[k] * q.im(k);
+                }
+                if (velocity) {
+                    // v = iω·x
+                    re[j] = -w * i;
+                    im[j] = w * r;
+                } else {
+                    re[j] = r;
+                    im[j] = i;
+                }
+            }
+        }
+        for (int j = 0; j < size; j++) {
+            if (!Double.isFinite(re[j]) || !Double.isFinite(im[j])) {
+                throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
+                        + "' at " + Display.rpm(speed) + " came out as " + re[j] + " + " + im[j] + "i"
+                        + "; check that mass, stiffness and damping are positive and that damping is not zero");
+            }
+        }
     }
 
     private static double combine(List<Combination.Contribution> component, Measure measure) {

@@ -26,18 +26,62 @@ public final class Drives {
      * an order-only excitation, which carries no force.
      */
     public static Optional<Drive> at(Excitation excitation, double speed, Operation operation) {
-        double omega = omega(excitation.frequency(), speed);
-        boolean follows = excitation.frequency() instanceof ExcitationFrequency.Order;
-        Complex phase = Complex.I.multiply(excitation.phase()).exp();
-        if (excitation instanceof Excitation.Unbalance u) {
-            double unbalance = unbalance(u, operation);
-            return Optional.of(new Drive(u, omega, new Load.Force(phase.multiply(unbalance * omega * omega), u.placement()), true));
-        } else if (excitation instanceof Excitation.Force f) {
-            return Optional.of(new Drive(f, omega, new Load.Force(phase.multiply(f.amplitude().si()), f.placement()), follows));
-        } else if (excitation instanceof Excitation.BaseMotion b) {
-            return Optional.of(new Drive(b, omega, new Load.GroundMotion(groundDisplacement(b, omega), b.direction()), follows));
+        if (excitation instanceof Excitation.OrderOnly) {
+            return Optional.empty();
         }
-        return Optional.empty(); // Excitation.OrderOnly
+        return Optional.of(prepare(excitation, operation).at(speed));
+    }
+
+    /**
+     * An excitation made ready to give its load at many speeds: the phase factor e^{iφ}, the
+     * unbalance and any fixed amplitude are worked out once (a sweep asks at hundreds of speeds,
+     * and the complex exponential costs more than the rest). The loads are the same numbers
+     * {@link #at} gives.
+     *
+     * @throws IllegalArgumentException for an order-only excitation, which carries no load
+     */
+    public static Prepared prepare(Excitation excitation, Operation operation) {
+        return new Prepared(excitation, operation);
+    }
+
+    /** One excitation's loads, ready for any running speed. */
+    public static final class Prepared {
+
+        private final Excitation source;
+        private final boolean follows;
+        private final Complex phase;
+        private final double unbalance;
+        private final Load fixedLoad;
+        private final Complex statedMotion;
+
+        private Prepared(Excitation excitation, Operation operation) {
+            if (excitation instanceof Excitation.OrderOnly) {
+                throw new IllegalArgumentException("order-only excitation '" + excitation.name() + "' carries no load");
+            }
+            source = excitation;
+            follows = excitation.frequency() instanceof ExcitationFrequency.Order;
+            phase = Complex.I.multiply(excitation.phase()).exp();
+            unbalance = excitation instanceof Excitation.Unbalance u ? unbalance(u, operation) : 0;
+            fixedLoad = excitation instanceof Excitation.Force f
+                    ? new Load.Force(phase.multiply(f.amplitude().si()), f.placement()) : null;
+            statedMotion = excitation instanceof Excitation.BaseMotion b ? stated(b) : null;
+        }
+
+        public Excitation source() {
+            return source;
+        }
+
+        /** The load at running speed {@code speed} (rad/s). */
+        public Drive at(double speed) {
+            double omega = omega(source.frequency(), speed);
+            if (source instanceof Excitation.Unbalance u) {
+                return new Drive(u, omega, new Load.Force(phase.multiply(unbalance * omega * omega), u.placement()), true);
+            } else if (fixedLoad != null) {
+                return new Drive(source, omega, fixedLoad, follows);
+            }
+            Excitation.BaseMotion b = (Excitation.BaseMotion) source;
+            return new Drive(b, omega, new Load.GroundMotion(integrated(b, statedMotion, omega), b.direction()), follows);
+        }
     }
 
     /**
@@ -45,7 +89,16 @@ public final class Drives {
      * harmonic divides by iω: Y = V/(iω), Y = A/(iω)² = −A/ω². The magnitudes are V/ω and A/ω².
      */
     static Complex groundDisplacement(Excitation.BaseMotion b, double omega) {
-        Complex stated = Complex.I.multiply(b.phase()).exp().multiply(b.amplitude().si());
+        return integrated(b, stated(b), omega);
+    }
+
+    /** The stated ground quantity as a phasor (its phase included). */
+    private static Complex stated(Excitation.BaseMotion b) {
+        return Complex.I.multiply(b.phase()).exp().multiply(b.amplitude().si());
+    }
+
+    /** The ground displacement from the stated phasor: as is, or divided by iω or (iω)². */
+    private static Complex integrated(Excitation.BaseMotion b, Complex stated, double omega) {
         switch (b.measure()) {
             case DISPLACEMENT:
                 return stated;

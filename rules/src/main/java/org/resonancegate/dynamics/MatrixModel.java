@@ -59,6 +59,8 @@ final class MatrixModel {
     private final double[] zeta;
     final double[][] phi;
     private final double[][] rowModal;
+    /** Per ground-force component and mode, Σ over the grounded rows of k_r·(g_r·φ_m). */
+    private final double[][] groundModal;
     final List<Mode> modes;
 
     /**
@@ -108,6 +110,14 @@ final class MatrixModel {
         for (int r = 0; r < rows.length; r++) {
             for (int m = 0; m < n; m++) {
                 rowModal[r][m] = dot(rows[r].gather(), phi[m]);
+            }
+        }
+        groundModal = new double[groundComponents][n];
+        for (int r = 0; r < rows.length; r++) {
+            if (rows[r].groundComponent() >= 0) {
+                for (int m = 0; m < n; m++) {
+                    groundModal[rows[r].groundComponent()][m] += rows[r].k() * rowModal[r][m];
+                }
             }
         }
     }
@@ -196,47 +206,108 @@ final class MatrixModel {
         ei[m] = (ni * dr - nr * di) / d;
     }
 
-    /** q = s·Y + Σ φ_m·η_m; element force k_r·Σ (g_r·φ_m)·η_m·(1 + i·2ζ_m·ω/ω_m). */
+    /**
+     * q = s·Y + Σ φ_m·η_m; element force k_r·Σ (g_r·φ_m)·η_m·(1 + i·2ζ_m·ω/ω_m); each formed
+     * only when read.
+     */
     private Response modalResponse(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
-        Phasors q = new Phasors(n);
-        if (shift != null) {
-            for (int j = 0; j < n; j++) {
-                q.re[j] = shift[j] * yr;
-                q.im[j] = shift[j] * yi;
-            }
+        return new Response(new ModalParts(er, ei, w, shift, yr, yi));
+    }
+
+    /** The modal amplitudes of one response, from which its quantities are formed on demand. */
+    private final class ModalParts implements Response.Parts {
+
+        private final double[] er;
+        private final double[] ei;
+        private final double w;
+        private final double[] shift;
+        private final double yr;
+        private final double yi;
+        private double[] gr;
+        private double[] gi;
+
+        ModalParts(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
+            this.er = er;
+            this.ei = ei;
+            this.w = w;
+            this.shift = shift;
+            this.yr = yr;
+            this.yi = yi;
         }
-        double[] gr = new double[n];
-        double[] gi = new double[n];
-        for (int m = 0; m < n; m++) {
-            double[] v = phi[m];
-            for (int j = 0; j < n; j++) {
-                q.re[j] += v[j] * er[m];
-                q.im[j] += v[j] * ei[m];
+
+        @Override
+        public Phasors displacements() {
+            Phasors q = new Phasors(n);
+            if (shift != null) {
+                for (int j = 0; j < n; j++) {
+                    q.re[j] = shift[j] * yr;
+                    q.im[j] = shift[j] * yi;
+                }
             }
-            double t = omegaN[m] > 0 ? 2 * zeta[m] * w / omegaN[m] : 0;
-            gr[m] = er[m] - t * ei[m];
-            gi[m] = ei[m] + t * er[m];
-        }
-        Phasors f = new Phasors(rows.length);
-        Phasors g = new Phasors(groundComponents);
-        for (int r = 0; r < rows.length; r++) {
-            double[] c = rowModal[r];
-            double sr = 0;
-            double si = 0;
             for (int m = 0; m < n; m++) {
-                sr += c[m] * gr[m];
-                si += c[m] * gi[m];
+                double[] v = phi[m];
+                for (int j = 0; j < n; j++) {
+                    q.re[j] += v[j] * er[m];
+                    q.im[j] += v[j] * ei[m];
+                }
             }
-            double k = rows[r].k();
-            f.re[r] = k * sr;
-            f.im[r] = k * si;
-            int gc = rows[r].groundComponent();
-            if (gc >= 0) {
-                g.re[gc] += f.re[r];
-                g.im[gc] += f.im[r];
+            return q;
+        }
+
+        @Override
+        public Phasors elementForces() {
+            modalForces();
+            Phasors f = new Phasors(rows.length);
+            for (int r = 0; r < rows.length; r++) {
+                double[] c = rowModal[r];
+                double sr = 0;
+                double si = 0;
+                for (int m = 0; m < n; m++) {
+                    sr += c[m] * gr[m];
+                    si += c[m] * gi[m];
+                }
+                double k = rows[r].k();
+                f.re[r] = k * sr;
+                f.im[r] = k * si;
+            }
+            return f;
+        }
+
+        /**
+         * The ground force straight from the modes (the rows' modal coefficients are summed per
+         * component once per model), so judging isolation does not form every mount's force.
+         */
+        @Override
+        public Phasors groundForces() {
+            modalForces();
+            Phasors g = new Phasors(groundComponents);
+            for (int c = 0; c < groundComponents; c++) {
+                double[] a = groundModal[c];
+                double sr = 0;
+                double si = 0;
+                for (int m = 0; m < n; m++) {
+                    sr += a[m] * gr[m];
+                    si += a[m] * gi[m];
+                }
+                g.re[c] = sr;
+                g.im[c] = si;
+            }
+            return g;
+        }
+
+        /** Each mode's elastic-plus-damping amplitude η_m·(1 + i·2ζ_m·ω/ω_m), worked out once. */
+        private void modalForces() {
+            if (gr != null) {
+                return;
+            }
+            gr = new double[n];
+            gi = new double[n];
+            for (int m = 0; m < n; m++) {
+                double t = omegaN[m] > 0 ? 2 * zeta[m] * w / omegaN[m] : 0;
+                gr[m] = er[m] - t * ei[m];
+                gi[m] = ei[m] + t * er[m];
             }
         }
-        return new Response(q, f, g);
     }
 
     /** Solves (K − ω²M + i(H + ωC))·q = b; element force (k(1 + iη) + iωc)·(g·q − ground share·Y). */

@@ -4,12 +4,66 @@ package org.resonancegate.dynamics;
  * The steady-state complex response of a linear system to one {@link Load} at one angular
  * frequency (each quantity is Re(A·e^{iωt})).
  *
- * @param displacements absolute amplitudes of the degrees of freedom (single mass, chain: each mass
- *                      along the line; rigid body: x, y, z of the centre of gravity and rotations
- *                      about x, y, z); a {@link Probe} turns them into the motion of a point
- * @param elementForces dynamic force (elastic plus damping) in each element row: one per spring,
- *                      three (x, y, z) per mount, in {@link LinearSystem#elementRows()} order
- * @param groundForces  the total force into the ground: one component along a line, x, y, z for a body
+ * <p>A modal model hands over its modal amplitudes and each quantity is formed when first read
+ * (so a response is read by one thread, like the context that holds it):
+ * a criterion that refines its own peak reads one quantity only (the motion of a point, the
+ * mount forces or the ground force), and forming the others would cost most of the time.
  */
-public record Response(Phasors displacements, Phasors elementForces, Phasors groundForces) {
+public final class Response {
+
+    /** Forms the quantities of a response from what the model kept; each is asked at most once. */
+    interface Parts {
+        Phasors displacements();
+
+        Phasors elementForces();
+
+        Phasors groundForces();
+    }
+
+    private Parts parts;
+    private Phasors displacements;
+    private Phasors elementForces;
+    private Phasors groundForces;
+
+    /**
+     * @param displacements absolute amplitudes of the degrees of freedom (single mass, chain: each
+     *                      mass along the line; rigid body: x, y, z of the centre of gravity and
+     *                      rotations about x, y, z); a {@link Probe} turns them into the motion of a point
+     * @param elementForces dynamic force (elastic plus damping) in each element row: one per spring,
+     *                      three (x, y, z) per mount, in {@link LinearSystem#elementRows()} order
+     * @param groundForces  the total force into the ground: one component along a line, x, y, z for a body
+     */
+    public Response(Phasors displacements, Phasors elementForces, Phasors groundForces) {
+        this.displacements = displacements;
+        this.elementForces = elementForces;
+        this.groundForces = groundForces;
+    }
+
+    Response(Parts parts) {
+        this.parts = parts;
+    }
+
+    /** Absolute amplitudes of the degrees of freedom. */
+    public Phasors displacements() {
+        if (displacements == null) {
+            displacements = parts.displacements();
+        }
+        return displacements;
+    }
+
+    /** Dynamic force in each element row, in {@link LinearSystem#elementRows()} order. */
+    public Phasors elementForces() {
+        if (elementForces == null) {
+            elementForces = parts.elementForces();
+        }
+        return elementForces;
+    }
+
+    /** The total force into the ground. */
+    public Phasors groundForces() {
+        if (groundForces == null) {
+            groundForces = parts.groundForces();
+        }
+        return groundForces;
+    }
 }
