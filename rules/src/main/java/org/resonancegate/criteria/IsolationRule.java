@@ -2,6 +2,7 @@ package org.resonancegate.criteria;
 
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.function.Supplier;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.Drives;
@@ -100,29 +101,32 @@ final class IsolationRule {
         OptionalDouble speedRpm = ctx.fixedSpeed() || governing.speedDependent()
                 ? OptionalDouble.of(Display.rpmValue(peak.speed())) : OptionalDouble.empty();
         OptionalDouble hz = OptionalDouble.of(Display.hzValue(governing.omega()));
-        String where = " for '" + governing.source().name() + "'" + Display.named(" at ", point) + " "
-                + (speedRpm.isPresent() ? Display.speedAndFrequency(peak.speed(), governing.omega())
+        // Worded only if this case governs (the message of every other tolerance case is never read).
+        double topSpeed = peak.speed();
+        Supplier<String> where = () -> " for '" + governing.source().name() + "'" + Display.named(" at ", point) + " "
+                + (speedRpm.isPresent() ? Display.speedAndFrequency(topSpeed, governing.omega())
                 : "at " + Display.hz(governing.omega()));
         if (c.limit() instanceof Criterion.IsolationLimit.MinEfficiency e) {
             double limit = e.value().value();
             double efficiency = 1 - t;
             double badness = Finding.belowBound(efficiency, limit);
-            String verdict = badness > 0
+            Supplier<String> verdict = () -> badness > 0
                     ? " is below the required " + Display.percent(limit) + " by "
                     + Display.sig((limit - efficiency) * 100, 3) + " percentage points"
                     : " meets the required " + Display.percent(limit) + " with "
                     + Display.sig((efficiency - limit) * 100, 3) + " percentage points to spare";
             return new Finding(efficiency, limit, "1", speedRpm, hz, badness,
-                    "isolation efficiency " + Display.percent(efficiency) + " (transmissibility " + Display.sig(t)
-                            + ")" + where + verdict + nearest(ctx, governing.omega()));
+                    () -> "isolation efficiency " + Display.percent(efficiency) + " (transmissibility "
+                            + Display.sig(t) + ")" + where.get() + verdict.get() + nearest(ctx, governing.omega()));
         }
         double limit = c.limit().value().value();
         double badness = Finding.aboveBound(t, limit);
-        String verdict = badness > 0
+        Supplier<String> verdict = () -> badness > 0
                 ? " exceeds " + Display.sig(limit) + " by " + Display.percent(badness)
                 : " is within " + Display.sig(limit) + " (" + Display.percent(-badness) + " below)";
         return new Finding(t, limit, "1", speedRpm, hz, badness,
-                "transmissibility " + Display.sig(t) + where + verdict + nearest(ctx, governing.omega()));
+                () -> "transmissibility " + Display.sig(t) + where.get() + verdict.get()
+                        + nearest(ctx, governing.omega()));
     }
 
     static String nearest(RuleContext ctx, double omega) {

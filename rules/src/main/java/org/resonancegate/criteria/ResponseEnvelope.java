@@ -121,16 +121,12 @@ final class ResponseEnvelope {
         final double[] groupOmega;
         final double[][] re;
         final double[][] im;
-        final double[] sumRe;
-        final double[] sumIm;
 
         Scratch(int drives, int size) {
             group = new int[drives];
             groupOmega = new double[drives];
             re = new double[drives][size];
             im = new double[drives][size];
-            sumRe = new double[drives];
-            sumIm = new double[drives];
         }
     }
 
@@ -172,26 +168,24 @@ final class ResponseEnvelope {
             group[d] = found;
             read(channels, dr, re[d], im[d], speed);
         }
-        double[] sumRe = scratch.sumRe;
-        double[] sumIm = scratch.sumIm;
         double worst = 0;
         for (int j = 0; j < size; j++) {
-            java.util.Arrays.fill(sumRe, 0, groups, 0);
-            java.util.Arrays.fill(sumIm, 0, groups, 0);
-            for (int d = 0; d < drives; d++) {
-                sumRe[group[d]] += re[d][j];
-                sumIm[group[d]] += im[d][j];
-            }
+            // Each group's phasor sum is formed in registers, drives in listing order (the same
+            // sums, bit for bit, as accumulating into arrays), with no arrays to clear per component.
             double v = 0;
+            for (int g = 0; g < groups; g++) {
+                double sr = 0;
+                double si = 0;
+                for (int d = 0; d < drives; d++) {
+                    if (group[d] == g) {
+                        sr += re[d][j];
+                        si += im[d][j];
+                    }
+                }
+                v += measure == Measure.RMS ? (sr * sr + si * si) / 2 : Math.sqrt(sr * sr + si * si);
+            }
             if (measure == Measure.RMS) {
-                for (int g = 0; g < groups; g++) {
-                    v += (sumRe[g] * sumRe[g] + sumIm[g] * sumIm[g]) / 2;
-                }
                 v = Math.sqrt(v);
-            } else {
-                for (int g = 0; g < groups; g++) {
-                    v += Math.sqrt(sumRe[g] * sumRe[g] + sumIm[g] * sumIm[g]);
-                }
             }
             worst = Math.max(worst, measure.factor * v);
         }

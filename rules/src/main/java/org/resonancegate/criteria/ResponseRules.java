@@ -45,18 +45,20 @@ final class ResponseRules {
         OptionalDouble speedRpm = speedShown ? OptionalDouble.of(Display.rpmValue(w.speed())) : OptionalDouble.empty();
         OptionalDouble hz = Double.isFinite(w.omega()) ? OptionalDouble.of(Display.hzValue(w.omega()))
                 : OptionalDouble.empty();
-        String frequency = w.frequencies() > 1 ? "largest share at " + Display.hz(w.omega())
-                : Display.hz(w.omega());
-        String where = speedShown ? " at " + Display.rpm(w.speed()) + " (" + frequency + ")"
-                : " (" + frequency + ")";
-        String verdict = badness > 0
-                ? " exceeds " + uu.format(limit) + " by " + Display.percent(badness)
-                : " is within " + uu.format(limit) + " (" + Display.percent(-badness) + " below)";
-        // A single spring keeps the wording it always had; several are named.
-        String subject = w.label().isEmpty() && preposition.equals(" in ") ? what + " in the spring"
-                : what + Display.named(preposition, w.label());
-        String message = subject + " " + uu.format(w.value()) + " " + measureWord + where + verdict
-                + IsolationRule.nearest(ctx, w.omega());
-        return new Finding(w.value(), limit, unit, speedRpm, hz, badness, message);
+        // Worded only if this case governs (the message of every other tolerance case is never read).
+        return new Finding(w.value(), limit, unit, speedRpm, hz, badness, () -> {
+            String frequency = w.frequencies() > 1 ? "largest share at " + Display.hz(w.omega())
+                    : Display.hz(w.omega());
+            String where = speedShown ? " at " + Display.rpm(w.speed()) + " (" + frequency + ")"
+                    : " (" + frequency + ")";
+            String verdict = badness > 0
+                    ? " exceeds " + uu.format(limit) + " by " + Display.percent(badness)
+                    : " is within " + uu.format(limit) + " (" + Display.percent(-badness) + " below)";
+            // A single spring keeps the wording it always had; several are named.
+            String subject = w.label().isEmpty() && preposition.equals(" in ") ? what + " in the spring"
+                    : what + Display.named(preposition, w.label());
+            return subject + " " + uu.format(w.value()) + " " + measureWord + where + verdict
+                    + IsolationRule.nearest(ctx, w.omega());
+        });
     }
 }

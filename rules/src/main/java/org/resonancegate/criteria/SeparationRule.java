@@ -46,8 +46,10 @@ final class SeparationRule {
         double badness = margin != 0 ? (margin - worst.value()) / Math.abs(margin) : -worst.value();
         OptionalDouble speedRpm = worst.speed().isPresent()
                 ? OptionalDouble.of(Display.rpmValue(worst.speed().getAsDouble())) : OptionalDouble.empty();
+        Approach governing = worst;
         return new Finding(worst.value(), margin, "1", speedRpm,
-                OptionalDouble.of(Display.hzValue(worst.omega())), badness, message(worst, margin, badness > 0));
+                OptionalDouble.of(Display.hzValue(worst.omega())), badness,
+                () -> message(governing, margin, badness > 0)); // worded only if this case governs
     }
 
     private static Approach approach(Mode mode, double wn, Excitation e, RuleContext ctx) {

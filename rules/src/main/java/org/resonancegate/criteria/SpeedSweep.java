@@ -69,9 +69,9 @@ public final class SpeedSweep {
             if ((i == 0 || i == x.length - 1) && x.length > 1 && fallsInward(checked, x, y, i)) {
                 continue; // the range end is the top of its bracket, and it is a sample already
             }
-            double a = x[Math.max(0, i - 1)];
-            double b = x[Math.min(x.length - 1, i + 1)];
-            best = better(best, refine(checked, a, b, x[i]));
+            int left = Math.max(0, i - 1);
+            int right = Math.min(x.length - 1, i + 1);
+            best = better(best, refine(checked, x[left], x[right], start(x, y, left, i, right)));
         }
         return best;
     }
@@ -126,6 +126,24 @@ public final class SpeedSweep {
             }
         }
         return out;
+    }
+
+    /**
+     * Where Brent starts inside bracket [x_lo, x_hi]: the top of the parabola through the three
+     * samples, which near a smooth peak is already close, so fewer steps are spent closing in; the
+     * middle sample when the three do not make a downward parabola with its top strictly inside.
+     */
+    static double start(double[] x, double[] y, int lo, int mid, int hi) {
+        if (lo == mid || mid == hi) {
+            return x[mid];
+        }
+        double p = x[mid] - x[lo];
+        double q = x[mid] - x[hi];
+        double fp = y[mid] - y[hi];
+        double fq = y[mid] - y[lo];
+        double den = p * fp - q * fq;
+        double top = x[mid] - 0.5 * (p * p * fp - q * q * fq) / den;
+        return den != 0 && Double.isFinite(top) && top > x[lo] && top < x[hi] ? top : x[mid];
     }
 
     private static Peak refine(DoubleUnaryOperator f, double a, double b, double start) {
