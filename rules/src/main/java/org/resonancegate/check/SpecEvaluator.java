@@ -122,7 +122,8 @@ public final class SpecEvaluator {
             if (!Double.isFinite(m.angularFrequency())
                     || (m.dampingRatio().isPresent() && !Double.isFinite(m.dampingRatio().getAsDouble()))) {
                 throw new CriterionProblem("numerical trouble: mode " + m.index() + " came out as "
-                        + m.angularFrequency() + " rad/s (" + c.name() + ")");
+                        + m.angularFrequency() + " rad/s (" + c.name() + "); check that masses and stiffnesses"
+                        + " are stated in plausible units: their ratio is beyond what double precision can hold");
             }
         }
     }
