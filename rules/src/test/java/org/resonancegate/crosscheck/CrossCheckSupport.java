@@ -64,6 +64,18 @@ final class CrossCheckSupport {
     }
 
     /** A quantity string such as {@code "12.5 mm"}, quoted for JSON. */
+    /** The {@code operation.speed} value: one speed, or a min/max range. */
+    static String speedJson(double nMinRpm, double nMaxRpm) {
+        return nMinRpm == nMaxRpm ? q(nMinRpm, "rpm")
+                : "{\"min\": " + q(nMinRpm, "rpm") + ", \"max\": " + q(nMaxRpm, "rpm") + "}";
+    }
+
+    /** The {@code tolerances} member (with its leading comma), or nothing without tolerances. */
+    static String tolerancesJson(double tolK, double tolM) {
+        return tolK > 0 ? ",\n  \"tolerances\": {\"stiffness\": \"" + num(tolK * 100)
+                + " %\", \"mass\": \"" + num(tolM * 100) + " %\"}" : "";
+    }
+
     static String q(double v, String unit) {
         return "\"" + num(v) + " " + unit + "\"";
     }

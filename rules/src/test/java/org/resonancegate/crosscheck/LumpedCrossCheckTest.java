@@ -425,10 +425,8 @@ class LumpedCrossCheckTest {
                 case ORDER -> String.format(Locale.ROOT, "{\"name\": \"%s\", \"kind\": \"order\", %s}", e.name(), when);
             });
         }
-        String speed = d.nMin() == d.nMax() ? q(d.nMin(), "rpm")
-                : "{\"min\": " + q(d.nMin(), "rpm") + ", \"max\": " + q(d.nMax(), "rpm") + "}";
-        String tolerances = d.tolK() > 0 ? ",\n  \"tolerances\": {\"stiffness\": \"" + num(d.tolK() * 100)
-                + " %\", \"mass\": \"" + num(d.tolM() * 100) + " %\"}" : "";
+        String speed = CrossCheckSupport.speedJson(d.nMin(), d.nMax());
+        String tolerances = CrossCheckSupport.tolerancesJson(d.tolK(), d.tolM());
         return String.format(Locale.ROOT, """
                 {
                   "format": "resonance-gate/1",
