@@ -3,10 +3,7 @@ package org.resonancegate.report;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.resonancegate.spec.SourceLocation;
@@ -69,27 +66,9 @@ public final class ResultsJson {
         return new String(toBytes(results), StandardCharsets.UTF_8);
     }
 
-    /**
-     * Writes the document to {@code target}, creating its directory. Atomic: the bytes go to a
-     * temporary file in the same directory, which is then moved over the target, so a reader
-     * (or an interrupted build) never sees half a file.
-     */
+    /** Writes the document to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
     public static void write(Results results, Path target) throws IOException {
-        byte[] bytes = toBytes(results);
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path temp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-        try {
-            Files.write(temp, bytes);
-            try {
-                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                // same directory, so only an exotic file system lands here; a plain replace is the best left
-                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+        AtomicWrite.write(target, toBytes(results));
     }
 
     private static void writeResults(JsonGenerator g, Results results) {

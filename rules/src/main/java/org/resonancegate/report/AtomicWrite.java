@@ -1,0 +1,36 @@
+package org.resonancegate.report;
+
+import java.io.IOException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/**
+ * Replaces a file in one step. The bytes go to a temporary file in the target's own directory
+ * (the same file system, so the move can be atomic), which is then moved over the target: a
+ * reader, or a build killed half-way, sees the old file or the new one, never a part of one.
+ */
+public final class AtomicWrite {
+
+    private AtomicWrite() {
+    }
+
+    /** Writes {@code bytes} to {@code target}, creating its directory, replacing any file there. */
+    public static void write(Path target, byte[] bytes) throws IOException {
+        Path dir = target.toAbsolutePath().getParent();
+        Files.createDirectories(dir);
+        Path temp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
+        try {
+            Files.write(temp, bytes);
+            try {
+                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                // same directory, so only an exotic file system lands here; a plain replace is the best left
+                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+}
