@@ -95,7 +95,8 @@ public final class ConsoleReport {
         return Long.toString(spec.checks().stream().filter(c -> c.status() == status).count());
     }
 
-    private static ConsoleLine countLine(Results results) {
+    /** The one-line count of specs and criteria by status, shared with the other short reports. */
+    static ConsoleLine countLine(Results results) {
         int specs = results.specs().size();
         if (specs == 0) {
             return new ConsoleLine(ConsoleLevel.WARNING, "0 specs: nothing checked");
