@@ -12,7 +12,10 @@ import static org.mockito.Mockito.verify;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.EnumSet;
 import java.util.List;
+import java.util.stream.Collectors;
 import org.apache.maven.api.plugin.testing.Basedir;
 import org.apache.maven.api.plugin.testing.InjectMojo;
 import org.apache.maven.api.plugin.testing.MojoExtension;
@@ -23,6 +26,7 @@ import org.apache.maven.plugin.MojoFailureException;
 import org.apache.maven.plugin.logging.Log;
 import org.junit.jupiter.api.Test;
 import org.mockito.ArgumentCaptor;
+import org.resonancegate.report.ReportFormat;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
@@ -40,15 +44,20 @@ class CheckMojoTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
-    private static Path basedir() {
+    /** The file the console points at when every format is written, and the others. */
+    static final String READER_FILE = ReportFormat.forReaders(EnumSet.allOf(ReportFormat.class)).orElseThrow().fileName();
+    static final String OTHERS = Arrays.stream(ReportFormat.values()).map(ReportFormat::fileName)
+            .filter(f -> !f.equals(READER_FILE)).collect(Collectors.joining(", "));
+
+    static Path basedir() {
         return Path.of(MojoExtension.getBasedir());
     }
 
-    private static JsonNode results(Path basedir) throws IOException {
+    static JsonNode results(Path basedir) throws IOException {
         return JSON.readTree(basedir.resolve("target/resonance-gate/results.json").toFile());
     }
 
-    private static List<String> lines(Log log, String level) {
+    static List<String> lines(Log log, String level) {
         ArgumentCaptor<CharSequence> captor = ArgumentCaptor.forClass(CharSequence.class);
         switch (level) {
             case "info" -> verify(log, atLeastOnce()).info(captor.capture());
@@ -68,8 +77,12 @@ class CheckMojoTest {
         verify(log, never()).error(any(CharSequence.class));
         List<String> info = lines(log, "info");
         assertTrue(info.contains("1 spec: 1 pass, 0 fail, 0 error; 0 criteria failed"), info.toString());
-        assertTrue(info.contains("resonance-gate: results written to target/resonance-gate/results.json"),
+        assertTrue(info.contains("resonance-gate: report: target/resonance-gate/" + READER_FILE + " (also " + OTHERS + ")"),
                 info.toString());
+        for (ReportFormat format : ReportFormat.values()) {
+            assertTrue(Files.isRegularFile(basedir().resolve("target/resonance-gate").resolve(format.fileName())),
+                    "every format by default: " + format.fileName());
+        }
         assertTrue(info.stream().anyMatch(l -> l.startsWith("src/vibration/chiller-pump.json  IT-1  pass")),
                 info.toString());
         JsonNode spec = results(basedir()).get("specs").get(0);
@@ -83,7 +96,8 @@ class CheckMojoTest {
     @InjectMojo(goal = "check", pom = "pom.xml")
     void failingSpecFailsTheBuildWithALocatedLine(CheckMojo mojo) throws Exception {
         MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
-        assertTrue(e.getMessage().startsWith("resonance-gate: 1 spec failed"), e.getMessage());
+        assertEquals("resonance-gate: 1 spec failed; see the lines above or target/resonance-gate/" + READER_FILE,
+                e.getMessage());
         List<String> errors = lines(mojo.getLog(), "error");
         assertTrue(errors.stream().anyMatch(l -> l.startsWith("src/vibration/tower-fan.json:9:5: IT-2 SEP separation: ")),
                 errors.toString());
