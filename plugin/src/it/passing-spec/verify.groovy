@@ -18,5 +18,7 @@ assert log.contains('[INFO] Caution: a screening aid on linear models.')
 assert log.contains('resonance-gate:check')
 assert log.contains('User property: resonance-gate.failOnViolation')
 assert log.contains('User property: resonance-gate.specDirectory')
+assert log.contains('User property: resonance-gate.formats')
+assert log.contains('User property: resonance-gate.summaryFile')
 assert log.contains('BUILD SUCCESS')
 return true
