@@ -188,8 +188,12 @@ public abstract class AbstractGateMojo extends AbstractMojo {
 
     private static String relativeLink(Path from, Path to) {
         Path dir = from.getParent();
-        Path rel = dir == null ? to : dir.relativize(to);
-        return rel.toString().replace(rel.getFileSystem().getSeparator(), "/");
+        try {
+            Path rel = dir == null ? to : dir.relativize(to);
+            return rel.toString().replace(rel.getFileSystem().getSeparator(), "/");
+        } catch (IllegalArgumentException e) {
+            return to.toUri().toString(); // another drive or root: no relative path leads there
+        }
     }
 
     private List<Path> collect(Path specs) throws MojoExecutionException {

@@ -58,7 +58,7 @@ public final class MarkdownSummary {
             if (rows.size() > MAX_ROWS) {
                 int more = rows.size() - MAX_ROWS;
                 md.append("…and ").append(more).append(more == 1 ? " more row" : " more rows")
-                        .append(" in the full report.\n\n");
+                        .append(reportHref.isPresent() ? " in the full report.\n\n" : ", not listed here.\n\n");
             }
         }
         reportHref.ifPresent(href -> md.append("Full report: [").append(MarkdownText.escape(href)).append("](")

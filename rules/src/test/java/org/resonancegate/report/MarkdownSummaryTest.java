@@ -127,6 +127,8 @@ class MarkdownSummaryTest {
         String md = MarkdownSummary.render(results, "resonance-gate", Optional.of("report.html"));
         assertEquals(MarkdownSummary.MAX_ROWS, bodyRows(PARSER.parse(md)).size());
         assertTrue(md.contains("…and 5 more rows in the full report."), md);
+        String unlinked = MarkdownSummary.render(results, "resonance-gate", Optional.empty());
+        assertTrue(unlinked.contains("…and 5 more rows, not listed here."), "no full report to point to");
     }
 
     @Test
