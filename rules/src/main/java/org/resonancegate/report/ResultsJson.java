@@ -3,10 +3,7 @@ package org.resonancegate.report;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.resonancegate.spec.SourceLocation;
@@ -75,21 +72,7 @@ public final class ResultsJson {
      * (or an interrupted build) never sees half a file.
      */
     public static void write(Results results, Path target) throws IOException {
-        byte[] bytes = toBytes(results);
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path temp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-        try {
-            Files.write(temp, bytes);
-            try {
-                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                // same directory, so only an exotic file system lands here; a plain replace is the best left
-                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+        AtomicFiles.write(target, toBytes(results));
     }
 
     private static void writeResults(JsonGenerator g, Results results) {
@@ -107,6 +90,8 @@ public final class ResultsJson {
         g.writeStartObject();
         g.writeStringProperty("file", spec.file());
         writeString(g, "id", spec.id());
+        writeString(g, "title", spec.details().title());
+        writeString(g, "revision", spec.details().revision());
         g.writeStringProperty("status", spec.status().key());
         g.writeArrayPropertyStart("modes");
         for (ModeResult mode : spec.modes()) {
@@ -138,6 +123,7 @@ public final class ResultsJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        ResultsJsonDetails.write(g, spec.details());
         g.writeEndObject();
     }
 
@@ -169,13 +155,13 @@ public final class ResultsJson {
         g.writeEndObject();
     }
 
-    private static void writeLocation(JsonGenerator g, SourceLocation location) {
+    static void writeLocation(JsonGenerator g, SourceLocation location) {
         g.writeStringProperty("file", location.file());
         g.writeNumberProperty("line", location.line());
         g.writeNumberProperty("column", location.column());
     }
 
-    private static void writeString(JsonGenerator g, String name, Optional<String> value) {
+    static void writeString(JsonGenerator g, String name, Optional<String> value) {
         if (value.isPresent()) {
             g.writeStringProperty(name, value.get());
         } else {
@@ -183,7 +169,7 @@ public final class ResultsJson {
         }
     }
 
-    private static void writeNumber(JsonGenerator g, String name, OptionalDouble value) {
+    static void writeNumber(JsonGenerator g, String name, OptionalDouble value) {
         if (value.isPresent()) {
             writeNumber(g, name, value.getAsDouble());
         } else {
@@ -191,8 +177,13 @@ public final class ResultsJson {
         }
     }
 
-    private static void writeNumber(JsonGenerator g, String name, double value) {
+    static void writeNumber(JsonGenerator g, String name, double value) {
         g.writeName(name);
+        writeNumber(g, value);
+    }
+
+    /** A number as an array element; the same rules as a property's. */
+    static void writeNumber(JsonGenerator g, double value) {
         if (!Double.isFinite(value)) {
             g.writeNull();
         } else if (value == Math.rint(value) && Math.abs(value) < 1e15) {
