@@ -39,6 +39,6 @@ final class Frames {
         } else {
             b.rect(a, y1, z - a, y0 - y1, "op");
         }
-        b.text((a + z) / 2, y1 + 12, "middle", "lbl op-lbl", 0, "operating range");
+        b.text((a + z) / 2, y0 - 6, "middle", "lbl op-lbl", 0, z - a < 2 ? "operating speed" : "operating range");
     }
 }

@@ -45,15 +45,7 @@ final class InterferencePlot {
     static Svg draw(Interference d, String clipId) {
         double xmax = d.maxSpeedRpm() > 0 ? ResponseCurves.REACH * d.maxSpeedRpm() : 100;
         double margin = d.margin().orElse(0);
-        double fmax = 0;
-        for (Interference.ModeLine m : d.modes()) {
-            fmax = Math.max(fmax, m.frequencyHz() * (1 + margin));
-        }
-        for (Interference.ExcitationLine e : d.excitations()) {
-            fmax = Math.max(fmax, e.order().isPresent() ? e.order().getAsDouble() * d.maxSpeedRpm() / 60
-                    : e.frequencyHz().getAsDouble());
-        }
-        fmax = fmax > 0 ? fmax * 1.12 : 10;
+        double fmax = frequencyReach(d, margin);
         double x0 = LEFT;
         double x1 = W - RIGHT;
         double y0 = H - BOTTOM;
@@ -63,6 +55,7 @@ final class InterferencePlot {
         Svg.Builder b = new Svg.Builder(W, H).clip(clipId, x0, y1, x1 - x0, y0 - y1);
         Frames.axes(b, xs, ys, "running speed (rpm)", "frequency (Hz)");
         Frames.operatingRange(b, xs, ys, d.minSpeedRpm(), d.maxSpeedRpm());
+        double labelY = Double.POSITIVE_INFINITY;
         for (Interference.ModeLine m : d.modes()) {
             double f = m.frequencyHz();
             if (margin > 0) {
@@ -71,7 +64,9 @@ final class InterferencePlot {
             }
             if (f <= fmax) {
                 b.line(x0, ys.at(f), x1, ys.at(f), "mode");
-                b.text(x1 + 6, ys.at(f) + 4, "start", "lbl mode-lbl", 0,
+                // modes listed lowest first: each label keeps clear of the one below it
+                labelY = Math.min(ys.at(f) + 4, labelY - 12);
+                b.text(x1 + 6, labelY, "start", "lbl mode-lbl", 0,
                         "mode " + m.index() + " · " + Units.number(f) + " Hz");
             }
         }
@@ -96,6 +91,26 @@ final class InterferencePlot {
         }
         crossings(b, d, xs, ys, xmax, fmax, margin, clipId);
         return b.build("interference diagram: natural frequencies against running speed and its orders");
+    }
+
+    /**
+     * The top of the frequency axis: the modes with their bands and some room above, so that a
+     * high order (a gear mesh far above every mode) does not squash the modes into the axis; the
+     * order lines are clipped at the top. Excitations reaching up to twice that are shown whole.
+     */
+    private static double frequencyReach(Interference d, double margin) {
+        double modes = 0;
+        for (Interference.ModeLine m : d.modes()) {
+            modes = Math.max(modes, m.frequencyHz() * (1 + margin));
+        }
+        double excitations = 0;
+        for (Interference.ExcitationLine e : d.excitations()) {
+            excitations = Math.max(excitations, e.order().isPresent()
+                    ? e.order().getAsDouble() * d.maxSpeedRpm() / 60 : e.frequencyHz().getAsDouble());
+        }
+        double top = modes > 0 ? Math.max(modes * 1.3, excitations <= 2 * modes * 1.3 ? excitations * 1.08 : 0)
+                : excitations * 1.08;
+        return top > 0 ? top : 10;
     }
 
     private static void crossings(Svg.Builder b, Interference d, Scale xs, Scale ys, double xmax, double fmax,
