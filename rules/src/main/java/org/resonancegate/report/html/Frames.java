@@ -3,6 +3,13 @@ package org.resonancegate.report.html;
 /** What both plots share: the frame, grid, ticks, axis titles and the shaded operating range. */
 final class Frames {
 
+    /** View-box width of every plot, and the margins around the plotting area (room for ticks, titles, mode labels). */
+    static final int W = 680;
+    static final double LEFT = 62;
+    static final double RIGHT = 150;
+    static final double TOP = 14;
+    static final double BOTTOM = 46;
+
     private Frames() {
     }
 

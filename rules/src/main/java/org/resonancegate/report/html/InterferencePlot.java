@@ -13,12 +13,7 @@ import org.resonancegate.report.Interference;
  */
 final class InterferencePlot {
 
-    static final int W = 680;
     static final int H = 330;
-    static final double LEFT = 62;
-    static final double RIGHT = 150;
-    static final double TOP = 14;
-    static final double BOTTOM = 46;
 
     private InterferencePlot() {
     }
@@ -46,13 +41,13 @@ final class InterferencePlot {
         double xmax = d.maxSpeedRpm() > 0 ? ResponseCurves.REACH * d.maxSpeedRpm() : 100;
         double margin = d.margin().orElse(0);
         double fmax = frequencyReach(d, margin);
-        double x0 = LEFT;
-        double x1 = W - RIGHT;
-        double y0 = H - BOTTOM;
-        double y1 = TOP;
+        double x0 = Frames.LEFT;
+        double x1 = Frames.W - Frames.RIGHT;
+        double y0 = H - Frames.BOTTOM;
+        double y1 = Frames.TOP;
         Scale xs = new Scale.Linear(0, xmax, x0, x1);
         Scale ys = new Scale.Linear(0, fmax, y0, y1);
-        Svg.Builder b = new Svg.Builder(W, H).clip(clipId, x0, y1, x1 - x0, y0 - y1);
+        Svg.Builder b = new Svg.Builder(Frames.W, H).clip(clipId, x0, y1, x1 - x0, y0 - y1);
         Frames.axes(b, xs, ys, "running speed (rpm)", "frequency (Hz)");
         Frames.operatingRange(b, xs, ys, d.minSpeedRpm(), d.maxSpeedRpm());
         double labelY = Double.POSITIVE_INFINITY;

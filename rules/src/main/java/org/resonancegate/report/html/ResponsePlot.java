@@ -12,12 +12,7 @@ import org.resonancegate.report.ResponseCurve;
  */
 final class ResponsePlot {
 
-    static final int W = 680;
     static final int H = 300;
-    static final double LEFT = 62;
-    static final double RIGHT = 150;
-    static final double TOP = 14;
-    static final double BOTTOM = 46;
 
     private ResponsePlot() {
     }
@@ -50,13 +45,13 @@ final class ResponsePlot {
             lo = Math.min(lo, limit / 3);
         }
         double xmax = n > 0 ? speeds[n - 1] : 1;
-        double x0 = LEFT;
-        double x1 = W - RIGHT;
-        double y0 = H - BOTTOM;
-        double y1 = TOP;
+        double x0 = Frames.LEFT;
+        double x1 = Frames.W - Frames.RIGHT;
+        double y0 = H - Frames.BOTTOM;
+        double y1 = Frames.TOP;
         Scale xs = new Scale.Linear(0, xmax, x0, x1);
         Scale ys = new Scale.Log(lo, hi, y0, y1);
-        Svg.Builder b = new Svg.Builder(W, H).clip(clipId, x0, y1, x1 - x0, y0 - y1);
+        Svg.Builder b = new Svg.Builder(Frames.W, H).clip(clipId, x0, y1, x1 - x0, y0 - y1);
         String unit = u.unit().isEmpty() || u.unit().equals("1") ? "" : " (" + u.unit() + ")";
         Frames.axes(b, xs, ys, "running speed (rpm)", c.quantity() + unit);
         double[] op = {minRpm, maxRpm};
