@@ -111,7 +111,11 @@ final class InterferencePlot {
     private static void crossings(Svg.Builder b, Interference d, Scale xs, Scale ys, double xmax, double fmax,
                                   double margin, String clipId) {
         for (Interference.ExcitationLine e : d.excitations()) {
-            if (e.order().isEmpty() || !(e.order().getAsDouble() > 0)) {
+            if (e.frequencyHz().isPresent()) {
+                fixedInBand(b, d, e.frequencyHz().getAsDouble(), xs, ys, margin, clipId);
+                continue;
+            }
+            if (!(e.order().getAsDouble() > 0)) {
                 continue;
             }
             double k = e.order().getAsDouble();
@@ -137,6 +141,24 @@ final class InterferencePlot {
                 } else {
                     b.dot(xs.at(n), ys.at(f), 4, "cross", where + ", outside the operating range");
                 }
+            }
+        }
+    }
+
+    /**
+     * A fixed frequency does not move with speed: inside a mode's band it stays there over the
+     * whole operating range, so the range's stretch of its line is marked, with a marker at the
+     * bottom speed.
+     */
+    private static void fixedInBand(Svg.Builder b, Interference d, double f, Scale xs, Scale ys, double margin,
+                                    String clipId) {
+        for (Interference.ModeLine m : d.modes()) {
+            if (Math.abs(f / m.frequencyHz() - 1) < margin) {
+                b.poly(new double[] {xs.at(d.minSpeedRpm()), xs.at(d.maxSpeedRpm())}, new double[] {ys.at(f), ys.at(f)},
+                        "hitseg", clipId);
+                b.dot(xs.at(d.minSpeedRpm()), ys.at(f), 7, "hit", "fixed " + Units.number(f) + " Hz lies inside the "
+                        + Units.percent(margin) + " band of mode " + m.index() + " (" + Units.number(m.frequencyHz())
+                        + " Hz) over the whole operating range");
             }
         }
     }

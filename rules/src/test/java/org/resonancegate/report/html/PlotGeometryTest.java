@@ -53,6 +53,19 @@ class PlotGeometryTest {
     }
 
     @Test
+    void aFixedFrequencyInsideABandIsMarkedAcrossTheRange() {
+        Interference d = new Interference("nominal", List.of(new Interference.ModeLine(1, 10)), OptionalDouble.of(0.2),
+                Optional.of("SEP"), List.of(new Interference.ExcitationLine("mains hum", OptionalDouble.empty(),
+                OptionalDouble.of(11))), 200, 400);
+        Svg svg = InterferencePlot.draw(d, "c");
+        // 11 Hz is 10 % from 10 Hz, inside the 20 % band, at every speed
+        List<Svg.Dot> hits = svg.dots().stream().filter(x -> x.cls().equals("hit")).toList();
+        assertEquals(1, hits.size());
+        assertEquals(tickX(svg, 200), Double.parseDouble(hits.get(0).cx()), 0.15);
+        assertEquals(yOf(svg, 11), Double.parseDouble(hits.get(0).cy()), 0.15);
+    }
+
+    @Test
     void theResponseLimitLineSitsAtItsLabelledValue() {
         ResponseCurve curve = new ResponseCurve("VEL", "nominal", "velocity rms", "m/s", 0.0045, "mm/s", 0.001,
                 List.of(new ResponseCurve.Point(100, 0.0002), new ResponseCurve.Point(500, 0.02),
