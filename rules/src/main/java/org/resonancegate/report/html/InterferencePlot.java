@@ -24,10 +24,12 @@ final class InterferencePlot {
 
     static List<Page.Legend> legend(Interference d) {
         List<Page.Legend> out = new ArrayList<>();
+        double reach = frequencyReach(d, d.margin().orElse(0));
         for (int i = 0; i < d.excitations().size(); i++) {
             Interference.ExcitationLine e = d.excitations().get(i);
             String what = e.order().isPresent() ? order(e.order().getAsDouble()) + " running speed"
-                    : "fixed " + Units.number(e.frequencyHz().getAsDouble()) + " Hz";
+                    : "fixed " + Units.number(e.frequencyHz().getAsDouble()) + " Hz"
+                    + (e.frequencyHz().getAsDouble() > reach ? " (above the plotted frequencies)" : "");
             out.add(new Page.Legend(excitationClass(i), what + ": " + e.name()));
         }
         return out;
