@@ -100,6 +100,10 @@ public final class ResultsJson {
             writeSpec(g, spec);
         }
         g.writeEndArray();
+        if (results.baseline().isPresent()) {
+            g.writeName("baseline");
+            ComparisonJson.write(g, results.baseline().get());
+        }
         g.writeEndObject();
     }
 
@@ -169,13 +173,13 @@ public final class ResultsJson {
         g.writeEndObject();
     }
 
-    private static void writeLocation(JsonGenerator g, SourceLocation location) {
+    static void writeLocation(JsonGenerator g, SourceLocation location) {
         g.writeStringProperty("file", location.file());
         g.writeNumberProperty("line", location.line());
         g.writeNumberProperty("column", location.column());
     }
 
-    private static void writeString(JsonGenerator g, String name, Optional<String> value) {
+    static void writeString(JsonGenerator g, String name, Optional<String> value) {
         if (value.isPresent()) {
             g.writeStringProperty(name, value.get());
         } else {
@@ -183,7 +187,7 @@ public final class ResultsJson {
         }
     }
 
-    private static void writeNumber(JsonGenerator g, String name, OptionalDouble value) {
+    static void writeNumber(JsonGenerator g, String name, OptionalDouble value) {
         if (value.isPresent()) {
             writeNumber(g, name, value.getAsDouble());
         } else {
@@ -191,7 +195,7 @@ public final class ResultsJson {
         }
     }
 
-    private static void writeNumber(JsonGenerator g, String name, double value) {
+    static void writeNumber(JsonGenerator g, String name, double value) {
         g.writeName(name);
         if (!Double.isFinite(value)) {
             g.writeNull();
