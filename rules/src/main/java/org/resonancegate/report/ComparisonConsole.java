@@ -13,7 +13,7 @@ import java.util.OptionalDouble;
  */
 final class ComparisonConsole {
 
-    private static final int MAX_TEXT = 120;
+    private static final int MAX_TEXT = 60;
 
     private ComparisonConsole() {
     }
@@ -54,8 +54,9 @@ final class ComparisonConsole {
         }
         for (InputChange i : s.inputs()) {
             String where = i.location().map(l -> l.display() + ": ").orElse(s.file() + ": ");
-            info(lines, "  " + where + "input " + i.path() + ": " + i.before().map(ComparisonConsole::cut).orElse("(absent)")
-                    + " → " + i.after().map(ComparisonConsole::cut).orElse("(removed)"));
+            int from = differFrom(i.before().orElse(""), i.after().orElse(""));
+            info(lines, "  " + where + "input " + i.path() + ": " + i.before().map(t -> cut(t, from)).orElse("(absent)")
+                    + " → " + i.after().map(t -> cut(t, from)).orElse("(removed)"));
         }
         for (ModeChange m : s.modes()) {
             if (m.moved()) {
@@ -67,7 +68,8 @@ final class ComparisonConsole {
             if (k.changed() || k.transition() != Transition.PASS) {
                 info(lines, "  " + k.criterion() + " " + k.rule() + ": "
                         + k.baselineStatus().map(CheckStatus::key).orElse("absent") + " → "
-                        + k.currentStatus().map(CheckStatus::key).orElse("absent") + " (" + k.transition().words() + ")"
+                        + k.currentStatus().map(CheckStatus::key).orElse("absent")
+                        + (k.transition() == Transition.PASS ? "" : tag(k.transition()))
                         + "; value " + number(k.baselineValue(), k.unit()) + " → " + number(k.currentValue(), k.unit())
                         + limit(k) + "; margin " + percent(k.baselineMargin()) + " → " + percent(k.currentMargin()));
             }
@@ -97,9 +99,27 @@ final class ComparisonConsole {
         lines.add(new ConsoleLine(ConsoleLevel.INFO, text));
     }
 
-    private static String cut(String text) {
-        int n = text.codePointCount(0, text.length());
-        return n <= MAX_TEXT ? text : text.substring(0, text.offsetByCodePoints(0, MAX_TEXT)) + "…";
+    /**
+     * Where to start showing two long texts so the difference is in view: a few characters before
+     * the first one that differs (0 for short texts).
+     */
+    private static int differFrom(String a, String b) {
+        if (a.codePointCount(0, a.length()) <= MAX_TEXT && b.codePointCount(0, b.length()) <= MAX_TEXT) {
+            return 0;
+        }
+        int same = 0;
+        while (same < a.length() && same < b.length() && a.charAt(same) == b.charAt(same)) {
+            same++;
+        }
+        int start = Math.max(0, same - 12);
+        return start > 0 && Character.isLowSurrogate(a.charAt(start)) ? start - 1 : start;
+    }
+
+    /** The text from {@code from} on, at most {@link #MAX_TEXT} characters, with "…" where it is cut. */
+    private static String cut(String text, int from) {
+        String tail = from <= 0 ? text : "…" + text.substring(Math.min(from, text.length()));
+        int n = tail.codePointCount(0, tail.length());
+        return n <= MAX_TEXT ? tail : tail.substring(0, tail.offsetByCodePoints(0, MAX_TEXT)) + "…";
     }
 
     private static String hz(OptionalDouble f) {
