@@ -15,6 +15,7 @@ import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.resonancegate.report.CheckStatus;
+import org.resonancegate.report.ConsoleLevel;
 import org.resonancegate.report.ConsoleLine;
 import org.resonancegate.report.ConsoleReport;
 import org.resonancegate.report.CriterionChange;
@@ -129,8 +130,13 @@ class BaselineRunTest {
             Ratchet.Verdict ratchet = Ratchet.judge(r, FailOn.NEW_VIOLATION);
             assertFalse(ratchet.fails());
             assertTrue(ratchet.note().contains("carried over"), ratchet.note());
-            assertTrue(ConsoleReport.lines(r, true).stream().anyMatch(l -> l.text().contains("SEP separation (carried over): ")
-                    && l.level() == org.resonancegate.report.ConsoleLevel.WARNING));
+            List<ConsoleLine> ratcheted = ConsoleReport.lines(r, true);
+            assertTrue(ratcheted.stream().anyMatch(l -> l.text().contains("SEP separation (carried over): ")
+                    && l.level() == ConsoleLevel.WARNING), ratcheted.toString());
+            assertTrue(ratcheted.contains(new ConsoleLine(ConsoleLevel.WARNING, "1 spec: 0 pass, 1 fail, 0 error;"
+                    + " 1 criterion failed; since HEAD: 0 new, 1 carried over, 0 fixed")), ratcheted.toString());
+            assertTrue(ConsoleReport.lines(r, false).stream().anyMatch(l -> l.text().contains("(carried over): ")
+                    && l.level() == ConsoleLevel.ERROR));
         }
     }
 
