@@ -3,8 +3,6 @@ package org.resonancegate.maven;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.mockito.Mockito.atLeastOnce;
-import static org.mockito.Mockito.verify;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,11 +18,9 @@ import org.apache.maven.api.plugin.testing.MojoParameter;
 import org.apache.maven.api.plugin.testing.MojoTest;
 import org.apache.maven.plugin.MojoExecutionException;
 import org.apache.maven.plugin.MojoFailureException;
-import org.apache.maven.plugin.logging.Log;
 import org.eclipse.jgit.api.Git;
 import org.eclipse.jgit.lib.PersonIdent;
 import org.junit.jupiter.api.Test;
-import org.mockito.ArgumentCaptor;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
@@ -74,16 +70,6 @@ class BaselineMojoTest {
         return base;
     }
 
-    private static List<String> logged(Log log, String level) {
-        ArgumentCaptor<CharSequence> captor = ArgumentCaptor.forClass(CharSequence.class);
-        switch (level) {
-            case "info" -> verify(log, atLeastOnce()).info(captor.capture());
-            case "warn" -> verify(log, atLeastOnce()).warn(captor.capture());
-            default -> verify(log, atLeastOnce()).error(captor.capture());
-        }
-        return captor.getAllValues().stream().map(CharSequence::toString).toList();
-    }
-
     @Test
     @Basedir("/unit/ratchet-new")
     @InjectMojo(goal = "check", pom = "pom.xml")
@@ -93,10 +79,10 @@ class BaselineMojoTest {
         Path base = repository(fan("2 MN/m", "fan"), fan("11.4 MN/m", "fan"));
         MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
         assertTrue(e.getMessage().contains("1 new failing criterion"), e.getMessage());
-        List<String> errors = logged(mojo.getLog(), "error");
+        List<String> errors = CheckMojoTest.lines(mojo.getLog(), "error");
         assertTrue(errors.stream().anyMatch(l -> l.startsWith(SPEC + ":5:") && l.contains("FAN-1 SEP separation (new): ")),
                 errors.toString());
-        List<String> info = logged(mojo.getLog(), "info");
+        List<String> info = CheckMojoTest.lines(mojo.getLog(), "info");
         assertTrue(info.stream().anyMatch(l -> l.contains("input model.stiffness: \"2 MN/m\" → \"11.4 MN/m\"")),
                 info.toString());
         // f = √(k/m)/2π: 10.07 Hz → 24.03 Hz
@@ -115,7 +101,7 @@ class BaselineMojoTest {
     void aCarriedOverFailurePassesTheRatchetAndSaysSo(CheckMojo mojo) throws Exception {
         repository(fan("11.4 MN/m", "fan"), fan("11.4 MN/m", "fan on its new frame"));
         mojo.execute();
-        List<String> warnings = logged(mojo.getLog(), "warn");
+        List<String> warnings = CheckMojoTest.lines(mojo.getLog(), "warn");
         assertTrue(warnings.stream().anyMatch(l -> l.contains("FAN-1 SEP separation (carried over): ")), warnings.toString());
         assertTrue(warnings.stream().anyMatch(l -> l.contains("already failing at HEAD (carried over)")), warnings.toString());
     }
@@ -128,7 +114,7 @@ class BaselineMojoTest {
         repository(fan("11.4 MN/m", "fan"), fan("11.4 MN/m", "fan on its new frame"));
         MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
         assertTrue(e.getMessage().contains("1 spec failed"), e.getMessage());
-        assertTrue(logged(mojo.getLog(), "error").stream().anyMatch(l -> l.contains("SEP separation (carried over): ")));
+        assertTrue(CheckMojoTest.lines(mojo.getLog(), "error").stream().anyMatch(l -> l.contains("SEP separation (carried over): ")));
     }
 
     @Test

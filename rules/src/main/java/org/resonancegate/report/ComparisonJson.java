@@ -65,14 +65,7 @@ final class ComparisonJson {
             writeCriterion(g, c);
         }
         g.writeEndArray();
-        g.writeArrayPropertyStart("baselineErrors");
-        for (ErrorEntry error : spec.baselineErrors()) {
-            g.writeStartObject();
-            ResultsJson.writeLocation(g, error.location());
-            g.writeStringProperty("message", error.message());
-            g.writeEndObject();
-        }
-        g.writeEndArray();
+        ResultsJson.writeErrors(g, "baselineErrors", spec.baselineErrors());
         g.writeEndObject();
     }
 

@@ -7,6 +7,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.resonancegate.spec.SourceLocation;
@@ -134,15 +135,19 @@ public final class ResultsJson {
             writeCheck(g, check);
         }
         g.writeEndArray();
-        g.writeArrayPropertyStart("errors");
-        for (ErrorEntry error : spec.errors()) {
+        writeErrors(g, "errors", spec.errors());
+        g.writeEndObject();
+    }
+
+    static void writeErrors(JsonGenerator g, String name, List<ErrorEntry> errors) {
+        g.writeArrayPropertyStart(name);
+        for (ErrorEntry error : errors) {
             g.writeStartObject();
             writeLocation(g, error.location());
             g.writeStringProperty("message", error.message());
             g.writeEndObject();
         }
         g.writeEndArray();
-        g.writeEndObject();
     }
 
     private static void writeCheck(JsonGenerator g, CheckResult check) {
