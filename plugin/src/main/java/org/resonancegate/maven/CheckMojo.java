@@ -5,7 +5,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
-import java.util.ArrayList;
 import java.util.List;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -15,14 +14,13 @@ import org.apache.maven.plugins.annotations.LifecyclePhase;
 import org.apache.maven.plugins.annotations.Mojo;
 import org.apache.maven.plugins.annotations.Parameter;
 import org.apache.maven.plugins.annotations.ResolutionScope;
+import org.resonancegate.baseline.Ratchet;
 import org.resonancegate.check.CheckRequest;
 import org.resonancegate.check.CheckRun;
 import org.resonancegate.report.ConsoleLine;
 import org.resonancegate.report.ConsoleReport;
 import org.resonancegate.report.Results;
 import org.resonancegate.report.ResultsJson;
-import org.resonancegate.report.SpecResult;
-import org.resonancegate.report.SpecStatus;
 
 /**
  * Recomputes the dynamics of every equipment spec in the project and fails the build when one
@@ -67,6 +65,22 @@ public class CheckMojo extends AbstractMojo {
     @Parameter(property = "resonance-gate.skip", defaultValue = "false")
     private boolean skip;
 
+    /**
+     * A Git revision to compare with ({@code origin/main}, a tag, a commit, {@code HEAD}): the specs
+     * and profiles as they were there are judged too, and the report says what changed. Unset: no
+     * comparison.
+     */
+    @Parameter(property = "resonance-gate.baseline")
+    private String baseline;
+
+    /**
+     * {@code violation}: every failing criterion fails the build. {@code new-violation} (needs
+     * {@code baseline}): only criteria that fail now and did not fail at the baseline do; spec
+     * errors always do.
+     */
+    @Parameter(property = "resonance-gate.failOn", defaultValue = "violation")
+    private String failOn;
+
     /** Where {@code results.json} is written. */
     @Parameter(property = "resonance-gate.outputDirectory", defaultValue = "${project.build.directory}/resonance-gate")
     private File outputDirectory;
@@ -85,6 +99,8 @@ public class CheckMojo extends AbstractMojo {
         Path base = basedir.toPath().toAbsolutePath().normalize();
         Path specs = base.resolve(specDirectory.toPath()).normalize();
         Path resultsFile = base.resolve(outputDirectory.toPath()).normalize().resolve(ResultsJson.FILE_NAME);
+        BaselineOptions compared = BaselineOptions.of(baseline, failOn);
+        Clock clock = Clock.systemDefaultZone();
 
         Results results;
         String nothing = "";
@@ -101,12 +117,14 @@ public class CheckMojo extends AbstractMojo {
                         + (excludeList().isEmpty() ? "" : " minus excludes " + excludeList());
                 results = new Results(List.of());
             } else {
-                results = run(new CheckRequest(base, files, Clock.systemDefaultZone()));
+                results = run(new CheckRequest(base, files, clock));
                 if (results.specs().isEmpty()) {
                     nothing = "the files in " + display(base, specs) + " are all profiles, none is a spec";
                 }
             }
         }
+
+        results = compared.compare(base, clock, results, specs, new SpecFileScanner(includeList(), excludeList()));
 
         // written before any verdict so a failed build still leaves its record for the reports
         try {
@@ -114,7 +132,7 @@ public class CheckMojo extends AbstractMojo {
         } catch (IOException e) {
             throw new MojoExecutionException("resonance-gate: cannot write " + display(base, resultsFile) + ": " + e, e);
         }
-        for (ConsoleLine line : ConsoleReport.lines(results)) {
+        for (ConsoleLine line : ConsoleReport.lines(results, compared.carriedOverPasses())) {
             print(log, line);
         }
         log.info("resonance-gate: results written to " + display(base, resultsFile));
@@ -127,7 +145,11 @@ public class CheckMojo extends AbstractMojo {
             log.warn("resonance-gate: " + nothing + "; nothing to check (requireSpecs=false)");
         }
 
-        String verdict = verdict(results);
+        Ratchet.Verdict judged = compared.verdict(results);
+        if (!judged.note().isEmpty()) {
+            log.warn("resonance-gate: " + judged.note());
+        }
+        String verdict = judged.failure();
         if (verdict.isEmpty()) {
             return;
         }
@@ -153,20 +175,6 @@ public class CheckMojo extends AbstractMojo {
             // a spec's own faults come back as diagnostics; anything thrown is the engine's or the disk's
             throw new MojoExecutionException("resonance-gate: the check could not run: " + e, e);
         }
-    }
-
-    /** Empty when the build may pass; otherwise what breaks it, e.g. "1 spec failed, 2 specs have errors". */
-    static String verdict(Results results) {
-        long failed = results.specs().stream().map(SpecResult::status).filter(s -> s == SpecStatus.FAIL).count();
-        long broken = results.specs().stream().map(SpecResult::status).filter(s -> s == SpecStatus.ERROR).count();
-        List<String> parts = new ArrayList<>();
-        if (failed > 0) {
-            parts.add(failed + (failed == 1 ? " spec failed" : " specs failed"));
-        }
-        if (broken > 0) {
-            parts.add(broken + (broken == 1 ? " spec has errors" : " specs have errors"));
-        }
-        return String.join(", ", parts);
     }
 
     private List<String> includeList() {

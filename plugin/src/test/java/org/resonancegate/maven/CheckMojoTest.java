@@ -48,7 +48,7 @@ class CheckMojoTest {
         return JSON.readTree(basedir.resolve("target/resonance-gate/results.json").toFile());
     }
 
-    private static List<String> lines(Log log, String level) {
+    static List<String> lines(Log log, String level) {
         ArgumentCaptor<CharSequence> captor = ArgumentCaptor.forClass(CharSequence.class);
         switch (level) {
             case "info" -> verify(log, atLeastOnce()).info(captor.capture());

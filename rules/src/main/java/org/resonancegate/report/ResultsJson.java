@@ -4,6 +4,7 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.resonancegate.spec.SourceLocation;
@@ -83,6 +84,10 @@ public final class ResultsJson {
             writeSpec(g, spec);
         }
         g.writeEndArray();
+        if (results.baseline().isPresent()) {
+            g.writeName("baseline");
+            ComparisonJson.write(g, results.baseline().get());
+        }
         g.writeEndObject();
     }
 
@@ -115,16 +120,20 @@ public final class ResultsJson {
             writeCheck(g, check);
         }
         g.writeEndArray();
-        g.writeArrayPropertyStart("errors");
-        for (ErrorEntry error : spec.errors()) {
+        writeErrors(g, "errors", spec.errors());
+        ResultsJsonDetails.write(g, spec.details());
+        g.writeEndObject();
+    }
+
+    static void writeErrors(JsonGenerator g, String name, List<ErrorEntry> errors) {
+        g.writeArrayPropertyStart(name);
+        for (ErrorEntry error : errors) {
             g.writeStartObject();
             writeLocation(g, error.location());
             g.writeStringProperty("message", error.message());
             g.writeEndObject();
         }
         g.writeEndArray();
-        ResultsJsonDetails.write(g, spec.details());
-        g.writeEndObject();
     }
 
     private static void writeCheck(JsonGenerator g, CheckResult check) {
