@@ -66,7 +66,8 @@ public abstract class AbstractGateMojo extends AbstractMojo {
     private File outputDirectory;
 
     /**
-     * Which report files to write, by name: {@code json} (results.json), {@code markdown}
+     * Which report files to write, by name: {@code json} (results.json), {@code html}
+     * (report.html), {@code markdown}
      * (summary.md), {@code sarif} (results.sarif), {@code junit} (junit.xml), or {@code all}.
      * Empty (the default) writes every one. On the command line a comma-separated list, e.g.
      * {@code -Dresonance-gate.formats=json,sarif}. An unknown name is a configuration error.
@@ -82,6 +83,22 @@ public abstract class AbstractGateMojo extends AbstractMojo {
      */
     @Parameter(property = "resonance-gate.summaryFile")
     private File summaryFile;
+
+    /**
+     * A Git revision to compare with ({@code origin/main}, a tag, a commit, {@code HEAD}): the specs
+     * and profiles as they were there are judged too, and the reports say what changed. Unset: no
+     * comparison.
+     */
+    @Parameter(property = "resonance-gate.baseline")
+    private String baseline;
+
+    /**
+     * {@code violation}: every failing criterion fails the build. {@code new-violation} (needs
+     * {@code baseline}): only criteria that fail now and did not fail at the baseline do; spec
+     * errors always do.
+     */
+    @Parameter(property = "resonance-gate.failOn", defaultValue = "violation")
+    private String failOn;
 
     /** The goal's name, for log lines. */
     abstract String goal();
@@ -105,22 +122,29 @@ public abstract class AbstractGateMojo extends AbstractMojo {
                     + " (they default to the project's directories; check the plugin configuration)");
         }
         Set<ReportFormat> chosen = chosenFormats();
+        BaselineOptions compared = BaselineOptions.of(baseline, failOn);
+        Clock clock = Clock.systemDefaultZone();
         Path base = basedir.toPath().toAbsolutePath().normalize();
         Path output = base.resolve(outputDirectory.toPath()).normalize();
+        Path specs = base.resolve(specDirectory.toPath()).normalize();
 
-        SpecRun run = findAndRun(base, base.resolve(specDirectory.toPath()).normalize());
+        SpecRun run = findAndRun(base, specs, clock);
+        Results results = compared.compare(base, clock, run.results(), specs,
+                new SpecFileScanner(includeList(), excludeList()));
         // written before any verdict so a failed build still leaves its record and reports
-        Path reader = writeReports(base, output, run.results(), chosen);
+        Path reader = writeReports(base, output, results, chosen);
         if (summaryFile != null) {
-            appendSummary(base, base.resolve(summaryFile.toPath()).normalize(), output, run.results(), chosen);
+            appendSummary(base, base.resolve(summaryFile.toPath()).normalize(), output, results, chosen);
         }
-        for (ConsoleLine line : ConsoleReport.lines(run.results())) {
+        for (ConsoleLine line : ConsoleReport.lines(results, compared.carriedOverPasses())) {
             print(log, line);
         }
         String others = chosen.stream().filter(f -> !output.resolve(f.fileName()).equals(reader))
                 .map(ReportFormat::fileName).collect(Collectors.joining(", "));
         log.info("resonance-gate: report: " + display(base, reader) + (others.isEmpty() ? "" : " (also " + others + ")"));
-        conclude(Verdict.of(run.results(), run.nothing()), display(base, reader));
+        Verdict verdict = Verdict.of(compared.verdict(results), run.nothing());
+        verdict.letThrough().ifPresent(note -> log.warn("resonance-gate: " + note));
+        conclude(verdict, display(base, reader));
     }
 
     private Set<ReportFormat> chosenFormats() throws MojoExecutionException {
@@ -132,7 +156,7 @@ public abstract class AbstractGateMojo extends AbstractMojo {
         }
     }
 
-    private SpecRun findAndRun(Path base, Path specs) throws MojoExecutionException {
+    private SpecRun findAndRun(Path base, Path specs, Clock clock) throws MojoExecutionException {
         if (!Files.exists(specs)) {
             return new SpecRun(new Results(List.of()), "no spec directory " + display(base, specs));
         }
@@ -145,7 +169,7 @@ public abstract class AbstractGateMojo extends AbstractMojo {
             return new SpecRun(new Results(List.of()), "no file in " + display(base, specs) + " matches includes "
                     + includeList() + (excludeList().isEmpty() ? "" : " minus excludes " + excludeList()));
         }
-        Results results = run(new CheckRequest(base, files, Clock.systemDefaultZone()));
+        Results results = run(new CheckRequest(base, files, clock));
         return new SpecRun(results, results.specs().isEmpty()
                 ? "the files in " + display(base, specs) + " are all profiles, none is a spec" : "");
     }

@@ -1,11 +1,7 @@
 package org.resonancegate.maven;
 
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Optional;
-import org.resonancegate.report.Results;
-import org.resonancegate.report.SpecResult;
-import org.resonancegate.report.SpecStatus;
+import org.resonancegate.baseline.Ratchet;
 
 /**
  * What a run means for the build, worked out in one place for every goal; each goal then decides
@@ -14,21 +10,19 @@ import org.resonancegate.report.SpecStatus;
  * @param nothingChecked why nothing was checked (no spec directory, no file matching, only
  *                       profiles), or empty when at least one spec was read
  * @param violations     what would break the build ("1 spec failed, 2 specs have errors"), or empty
+ * @param letThrough     failures the baseline ratchet lets pass, to be said, or empty
  */
-record Verdict(Optional<String> nothingChecked, Optional<String> violations) {
+record Verdict(Optional<String> nothingChecked, Optional<String> violations, Optional<String> letThrough) {
 
-    /** @param nothing why nothing was checked, or {@code ""} */
-    static Verdict of(Results results, String nothing) {
-        long failed = results.specs().stream().map(SpecResult::status).filter(s -> s == SpecStatus.FAIL).count();
-        long broken = results.specs().stream().map(SpecResult::status).filter(s -> s == SpecStatus.ERROR).count();
-        List<String> parts = new ArrayList<>();
-        if (failed > 0) {
-            parts.add(failed + (failed == 1 ? " spec failed" : " specs failed"));
-        }
-        if (broken > 0) {
-            parts.add(broken + (broken == 1 ? " spec has errors" : " specs have errors"));
-        }
-        return new Verdict(nothing.isEmpty() ? Optional.empty() : Optional.of(nothing),
-                parts.isEmpty() ? Optional.empty() : Optional.of(String.join(", ", parts)));
+    /**
+     * @param judged  the ratchet's verdict on the results ({@code failOn} applied)
+     * @param nothing why nothing was checked, or {@code ""}
+     */
+    static Verdict of(Ratchet.Verdict judged, String nothing) {
+        return new Verdict(text(nothing), text(judged.failure()), text(judged.note()));
+    }
+
+    private static Optional<String> text(String s) {
+        return s.isEmpty() ? Optional.empty() : Optional.of(s);
     }
 }

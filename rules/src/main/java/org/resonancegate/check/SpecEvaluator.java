@@ -73,7 +73,8 @@ public final class SpecEvaluator {
                         + criterion.rule().key() + "): " + e.getMessage()));
             }
         }
-        return new SpecResult(spec.file(), Optional.of(spec.id()), status(checks, errors), modes, checks, errors);
+        return new SpecResult(spec.file(), Optional.of(spec.id()), status(checks, errors), modes, checks, errors,
+                SpecDetailsBuilder.build(spec, cases, contexts, checks));
     }
 
     private static CheckResult judge(Spec spec, Criterion criterion, List<ToleranceCase> cases,

@@ -2,6 +2,7 @@ package org.resonancegate.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.StringJoiner;
 
 /**
@@ -21,39 +22,58 @@ public final class ConsoleReport {
     }
 
     public static List<ConsoleLine> lines(Results results) {
+        return lines(results, false);
+    }
+
+    /**
+     * As {@link #lines(Results)}; with a baseline in the results, a "what changed" block per spec
+     * that moved, and each finding says whether it is new, carried over or fixed.
+     *
+     * @param carriedOverPasses the build lets failures carried over from the baseline pass (a
+     *                          ratchet): they are then printed as warnings, not errors
+     */
+    public static List<ConsoleLine> lines(Results results, boolean carriedOverPasses) {
         List<ConsoleLine> lines = new ArrayList<>();
         if (!results.specs().isEmpty()) {
             for (String row : table(results)) {
                 lines.add(new ConsoleLine(ConsoleLevel.INFO, row));
             }
         }
+        results.baseline().ifPresent(c -> ComparisonConsole.block(c, lines));
         for (SpecResult spec : results.specs()) {
             for (ErrorEntry error : spec.errors()) {
                 lines.add(new ConsoleLine(ConsoleLevel.ERROR,
                         error.location().display() + ": " + spec.id().orElse(spec.file()) + " " + error.message()));
             }
             for (CheckResult check : spec.checks()) {
-                finding(spec, check, lines);
+                finding(spec, check, ComparisonConsole.transition(results.baseline(), spec, check),
+                        carriedOverPasses, lines);
             }
         }
-        lines.add(countLine(results));
+        lines.add(countLine(results, carriedOverPasses));
         lines.add(new ConsoleLine(ConsoleLevel.INFO, CAUTION));
         return List.copyOf(lines);
     }
 
-    private static void finding(SpecResult spec, CheckResult check, List<ConsoleLine> lines) {
+    private static void finding(SpecResult spec, CheckResult check, Optional<Transition> transition,
+                                boolean carriedOverPasses, List<ConsoleLine> lines) {
         // A criterion from a shared profile points at its definition there; the spec file it
         // was judged for is named too, since that is the file a reviewer looks at.
         String judged = check.location().file().equals(spec.file()) ? "" : " [" + spec.file() + "]";
         String head = check.location().display() + ": " + spec.id().orElse(spec.file()) + judged + " "
-                + check.criterion() + " " + check.rule() + ": ";
+                + check.criterion() + " " + check.rule() + transition.map(ComparisonConsole::tag).orElse("") + ": ";
+        boolean carried = transition.filter(t -> t == Transition.CARRIED_OVER).isPresent();
         switch (check.status()) {
             case PASS -> {
-                // passing criteria are counted in the table, not listed
+                // passing criteria are counted in the table, not listed, unless they just got fixed
+                if (transition.filter(t -> t == Transition.FIXED).isPresent()) {
+                    lines.add(new ConsoleLine(ConsoleLevel.INFO, head + "passes now: " + check.message()));
+                }
             }
             // The engine's message already says "waived through DATE: reason" or "waiver expired
             // on DATE"; the console adds only the level.
-            case FAIL -> lines.add(new ConsoleLine(ConsoleLevel.ERROR, head + check.message()));
+            case FAIL -> lines.add(new ConsoleLine(carried && carriedOverPasses ? ConsoleLevel.WARNING
+                    : ConsoleLevel.ERROR, head + check.message()));
             case WARNING -> lines.add(new ConsoleLine(ConsoleLevel.WARNING,
                     head + check.message() + " (severity warning: does not fail the spec)"));
             case WAIVED -> lines.add(new ConsoleLine(ConsoleLevel.WARNING, head + check.message()));
@@ -96,7 +116,7 @@ public final class ConsoleReport {
     }
 
     /** The one-line count of specs and criteria by status, shared with the other short reports. */
-    static ConsoleLine countLine(Results results) {
+    static ConsoleLine countLine(Results results, boolean carriedOverPasses) {
         int specs = results.specs().size();
         if (specs == 0) {
             return new ConsoleLine(ConsoleLevel.WARNING, "0 specs: nothing checked");
@@ -124,8 +144,20 @@ public final class ConsoleReport {
         if (warnings > 0) {
             text.append(", ").append(warnings).append(warnings == 1 ? " warning" : " warnings");
         }
-        ConsoleLevel level = fail + error > 0 ? ConsoleLevel.ERROR
-                : waivedChecks + warnings > 0 ? ConsoleLevel.WARNING : ConsoleLevel.INFO;
+        results.baseline().ifPresent(c -> {
+            long[] n = new long[Transition.values().length];
+            c.specs().forEach(s -> s.criteria().forEach(k -> n[k.transition().ordinal()]++));
+            text.append("; since ").append(c.ref()).append(": ").append(n[Transition.NEW.ordinal()]).append(" new, ")
+                    .append(n[Transition.CARRIED_OVER.ordinal()]).append(" carried over, ")
+                    .append(n[Transition.FIXED.ordinal()]).append(" fixed");
+        });
+        // under the ratchet, failures all carried over from the baseline do not fail the build
+        boolean letThrough = carriedOverPasses && error == 0 && results.specs().stream().allMatch(spec ->
+                spec.checks().stream().filter(c -> c.status() == CheckStatus.FAIL).allMatch(c ->
+                        ComparisonConsole.transition(results.baseline(), spec, c)
+                                .filter(t -> t == Transition.CARRIED_OVER).isPresent()));
+        ConsoleLevel level = fail + error > 0 && !letThrough ? ConsoleLevel.ERROR
+                : fail + waivedChecks + warnings > 0 ? ConsoleLevel.WARNING : ConsoleLevel.INFO;
         return new ConsoleLine(level, text.toString());
     }
 

@@ -37,7 +37,7 @@ public final class MarkdownSummary {
     public static String render(Results results, String title, Optional<String> reportHref) {
         StringBuilder md = new StringBuilder();
         md.append("### ").append(MarkdownText.escape(MarkdownText.shorten(title, MAX_MESSAGE))).append("\n\n");
-        md.append("**").append(ConsoleReport.countLine(results).text()).append("**\n\n"); // our own words, no markup in them
+        md.append("**").append(ConsoleReport.countLine(results, false).text()).append("**\n\n"); // our own words, no markup in them
         List<ReportRow> rows = ReportRow.bySeriousness(results);
         if (rows.isEmpty()) {
             md.append(results.specs().isEmpty() ? "" : "Every criterion passes.\n\n");

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.resonancegate.report.html.HtmlReport;
 import org.resonancegate.units.Suggestions;
 
 /**
@@ -20,6 +21,7 @@ import org.resonancegate.units.Suggestions;
  */
 public enum ReportFormat {
     JSON("json", ResultsJson.FILE_NAME, 3, (results, file, chosen) -> ResultsJson.write(results, file)),
+    HTML("html", HtmlReport.FILE_NAME, 1, (results, file, chosen) -> HtmlReport.write(results, file)),
     MARKDOWN("markdown", MarkdownSummary.FILE_NAME, 2, (results, file, chosen) -> MarkdownSummary.write(results,
             EngineInfo.NAME, ReportFormat.fullReport(chosen).map(ReportFormat::fileName), file)),
     SARIF("sarif", SarifReport.FILE_NAME, 4, (results, file, chosen) -> SarifReport.write(results, file)),

@@ -4,6 +4,7 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.resonancegate.spec.SourceLocation;
@@ -79,6 +80,10 @@ public final class ResultsJson {
             writeSpec(g, spec);
         }
         g.writeEndArray();
+        if (results.baseline().isPresent()) {
+            g.writeName("baseline");
+            ComparisonJson.write(g, results.baseline().get());
+        }
         g.writeEndObject();
     }
 
@@ -86,6 +91,8 @@ public final class ResultsJson {
         g.writeStartObject();
         g.writeStringProperty("file", spec.file());
         writeString(g, "id", spec.id());
+        writeString(g, "title", spec.details().title());
+        writeString(g, "revision", spec.details().revision());
         g.writeStringProperty("status", spec.status().key());
         g.writeArrayPropertyStart("modes");
         for (ModeResult mode : spec.modes()) {
@@ -109,15 +116,20 @@ public final class ResultsJson {
             writeCheck(g, check);
         }
         g.writeEndArray();
-        g.writeArrayPropertyStart("errors");
-        for (ErrorEntry error : spec.errors()) {
+        writeErrors(g, "errors", spec.errors());
+        ResultsJsonDetails.write(g, spec.details());
+        g.writeEndObject();
+    }
+
+    static void writeErrors(JsonGenerator g, String name, List<ErrorEntry> errors) {
+        g.writeArrayPropertyStart(name);
+        for (ErrorEntry error : errors) {
             g.writeStartObject();
             writeLocation(g, error.location());
             g.writeStringProperty("message", error.message());
             g.writeEndObject();
         }
         g.writeEndArray();
-        g.writeEndObject();
     }
 
     private static void writeCheck(JsonGenerator g, CheckResult check) {
@@ -148,13 +160,13 @@ public final class ResultsJson {
         g.writeEndObject();
     }
 
-    private static void writeLocation(JsonGenerator g, SourceLocation location) {
+    static void writeLocation(JsonGenerator g, SourceLocation location) {
         g.writeStringProperty("file", location.file());
         g.writeNumberProperty("line", location.line());
         g.writeNumberProperty("column", location.column());
     }
 
-    private static void writeString(JsonGenerator g, String name, Optional<String> value) {
+    static void writeString(JsonGenerator g, String name, Optional<String> value) {
         if (value.isPresent()) {
             g.writeStringProperty(name, value.get());
         } else {
@@ -162,7 +174,7 @@ public final class ResultsJson {
         }
     }
 
-    private static void writeNumber(JsonGenerator g, String name, OptionalDouble value) {
+    static void writeNumber(JsonGenerator g, String name, OptionalDouble value) {
         if (value.isPresent()) {
             writeNumber(g, name, value.getAsDouble());
         } else {
@@ -170,8 +182,13 @@ public final class ResultsJson {
         }
     }
 
-    private static void writeNumber(JsonGenerator g, String name, double value) {
+    static void writeNumber(JsonGenerator g, String name, double value) {
         g.writeName(name);
+        writeNumber(g, value);
+    }
+
+    /** A number as an array element; the same rules as a property's. */
+    static void writeNumber(JsonGenerator g, double value) {
         if (!Double.isFinite(value)) {
             g.writeNull();
         } else if (value == Math.rint(value) && Math.abs(value) < 1e15) {

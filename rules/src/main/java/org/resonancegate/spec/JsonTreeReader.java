@@ -6,7 +6,6 @@ import java.nio.CharBuffer;
 import java.nio.charset.CharsetDecoder;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -75,23 +74,21 @@ final class JsonTreeReader {
         this.file = file;
     }
 
-    /**
-     * Reads {@code path}; {@code file} is its project-relative name for locations.
-     */
-    static Result read(Path path, String file) {
-        return new JsonTreeReader(file).readFile(path);
+    /** Reads {@code path} from {@code files}; {@code file} is its project-relative name for locations. */
+    static Result read(SpecFiles files, Path path, String file) {
+        return new JsonTreeReader(file).readFile(files, path);
     }
 
-    private Result readFile(Path path) {
+    private Result readFile(SpecFiles files, Path path) {
         SourceLocation start = new SourceLocation(file, 1, 1);
         byte[] bytes;
         try {
-            long size = Files.size(path);
+            long size = files.size(path);
             if (size > MAX_FILE_BYTES) {
                 return failed(start, "the file is " + size + " bytes, over the limit of 4 MiB ("
                         + MAX_FILE_BYTES + " bytes) for a spec or profile; split it into smaller files");
             }
-            bytes = Files.readAllBytes(path);
+            bytes = files.read(path);
         } catch (IOException | RuntimeException e) {
             return failed(start, "cannot read the file: " + describe(e));
         }

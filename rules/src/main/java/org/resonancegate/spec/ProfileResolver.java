@@ -1,7 +1,6 @@
 package org.resonancegate.spec;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -129,14 +128,14 @@ final class ProfileResolver {
                     + " stay inside the project's base directory, symbolic links resolved");
             return Optional.empty();
         }
-        if (!Files.exists(candidate)) {
+        if (!paths.files().exists(candidate)) {
             problems.add(ref.location(), "profile \"" + written + "\" not found: no file at "
                     + paths.display(candidate) + " (paths are relative to the file that lists them)");
             return Optional.empty();
         }
         Path real;
         try {
-            real = candidate.toRealPath();
+            real = paths.files().realPath(candidate);
         } catch (IOException | RuntimeException e) {
             problems.add(ref.location(), "profile \"" + written + "\" cannot be opened: " + e.getMessage());
             return Optional.empty();
@@ -146,7 +145,7 @@ final class ProfileResolver {
                     + real + "); profiles must stay inside the project's base directory, symbolic links resolved");
             return Optional.empty();
         }
-        if (!Files.isRegularFile(real)) {
+        if (!paths.files().isRegularFile(real)) {
             problems.add(ref.location(), "profile \"" + written + "\" is not a file");
             return Optional.empty();
         }
@@ -156,7 +155,7 @@ final class ProfileResolver {
     private ProfileFile readProfile(Path real) {
         String file = paths.display(real);
         Problems problems = new Problems();
-        JsonTreeReader.Result json = JsonTreeReader.read(real, file);
+        JsonTreeReader.Result json = JsonTreeReader.read(paths.files(), real, file);
         problems.addAll(json.diagnostics());
         if (json.root().isEmpty()) {
             return new ProfileFile(file, List.of(), List.of(), problems.all());

@@ -9,15 +9,23 @@ final class ProjectPaths {
     private final Path base;
     private final Path realBase;
 
-    ProjectPaths(Path projectBase) {
+    private final SpecFiles files;
+
+    ProjectPaths(Path projectBase, SpecFiles files) {
         this.base = projectBase.toAbsolutePath().normalize();
+        this.files = files;
         Path real;
         try {
-            real = base.toRealPath();
+            real = files.realPath(base);
         } catch (IOException | RuntimeException e) {
             real = base;
         }
         this.realBase = real;
+    }
+
+    /** Where the files' contents come from. */
+    SpecFiles files() {
+        return files;
     }
 
     /** The absolute, normalised form of {@code file}; a relative one is taken relative to the base. */

@@ -31,7 +31,15 @@ public final class SpecLoader {
      * @param files       candidate spec files, absolute or relative to {@code projectBase}
      */
     public static List<LoadedSpec> load(Path projectBase, List<Path> files) {
-        ProjectPaths paths = new ProjectPaths(projectBase);
+        return load(projectBase, files, SpecFiles.disk());
+    }
+
+    /**
+     * As {@link #load(Path, List)}, with the contents taken from {@code contents} (a Git commit,
+     * say) instead of the disk; names, diagnostics and profile resolution are the same.
+     */
+    public static List<LoadedSpec> load(Path projectBase, List<Path> files, SpecFiles contents) {
+        ProjectPaths paths = new ProjectPaths(projectBase, contents);
         ProfileResolver resolver = new ProfileResolver(paths);
         Set<Path> unique = new LinkedHashSet<>();
         for (Path f : files) {
@@ -51,7 +59,7 @@ public final class SpecLoader {
         String name = paths.display(file);
         Problems problems = new Problems();
         try {
-            JsonTreeReader.Result json = JsonTreeReader.read(file, name);
+            JsonTreeReader.Result json = JsonTreeReader.read(paths.files(), file, name);
             Optional<JsonNode> root = json.root();
             if (root.isPresent() && isProfile(root.get())) {
                 return Optional.empty();

@@ -58,7 +58,7 @@ class MarkdownSummaryTest {
         assertEquals(List.of("fail", "F-5", "PSEP", "separation"), profileRow.subList(0, 4));
         assertEquals("src/vibration/profiles/plant.json:5:5 (for src/vibration/e-fan.json)", profileRow.get(4));
         assertEquals("src/vibration/d-broken.json:4:31", rows.get(1).get(4));
-        assertTrue(md.contains("**" + ConsoleReport.countLine(results).text() + "**"), md);
+        assertTrue(md.contains("**" + ConsoleReport.countLine(results, false).text() + "**"), md);
         List<Link> links = nodes(doc, Link.class);
         assertEquals(1, links.size());
         assertEquals("report.html", links.get(0).getDestination());

@@ -37,6 +37,8 @@ class ResultsJsonTest {
                     {
                       "file": "src/vibration/p1.json",
                       "id": "P-1",
+                      "title": null,
+                      "revision": null,
                       "status": "fail",
                       "modes": [
                         {
@@ -65,11 +67,16 @@ class ResultsJsonTest {
                           "waiver": null
                         }
                       ],
-                      "errors": []
+                      "errors": [],
+                      "inputs": [],
+                      "interference": null,
+                      "curves": []
                     },
                     {
                       "file": "src/vibration/p2.json",
                       "id": null,
+                      "title": null,
+                      "revision": null,
                       "status": "error",
                       "modes": [],
                       "checks": [],
@@ -80,7 +87,10 @@ class ResultsJsonTest {
                           "column": 7,
                           "message": "unknown key \\"mas\\"; did you mean \\"mass\\"?"
                         }
-                      ]
+                      ],
+                      "inputs": [],
+                      "interference": null,
+                      "curves": []
                     }
                   ]
                 }

@@ -1,0 +1,115 @@
+package org.resonancegate.report.html;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.StringJoiner;
+import org.resonancegate.report.CheckResult;
+import org.resonancegate.report.CheckStatus;
+import org.resonancegate.report.ConsoleReport;
+import org.resonancegate.report.ErrorEntry;
+import org.resonancegate.report.InputValue;
+import org.resonancegate.report.ModeResult;
+import org.resonancegate.report.ResponseCurve;
+import org.resonancegate.report.Results;
+import org.resonancegate.report.SpecResult;
+import org.resonancegate.report.SpecStatus;
+import org.resonancegate.spec.SourceLocation;
+
+/** Words {@link Results} for the page: every number formatted, every status named, nothing computed anew. */
+final class Pages {
+
+    private Pages() {
+    }
+
+    static Page of(Results results) {
+        List<Page.Row> rows = new ArrayList<>();
+        List<Page.SpecView> specs = new ArrayList<>();
+        for (int i = 0; i < results.specs().size(); i++) {
+            SpecResult spec = results.specs().get(i);
+            String anchor = "spec-" + (i + 1);
+            rows.add(new Page.Row(anchor, spec.id().orElse("(no id)"), spec.details().title().orElse(""), spec.file(),
+                    spec.status().key(), count(spec, CheckStatus.PASS), count(spec, CheckStatus.FAIL),
+                    count(spec, CheckStatus.WARNING), count(spec, CheckStatus.WAIVED), spec.errors().size(),
+                    headline(spec)));
+            specs.add(SpecViews.of(spec, anchor, i + 1));
+        }
+        long failing = results.specs().stream()
+                .filter(s -> s.status() == SpecStatus.FAIL || s.status() == SpecStatus.ERROR).count();
+        String status = failing > 0 ? "fail"
+                : results.specs().stream().anyMatch(s -> s.status() == SpecStatus.WAIVED) ? "waived" : "pass";
+        return new Page("Vibration check", summary(results), status, ConsoleReport.CAUTION, rows, specs);
+    }
+
+    private static long count(SpecResult spec, CheckStatus status) {
+        return spec.checks().stream().filter(c -> c.status() == status).count();
+    }
+
+    private static String summary(Results results) {
+        int n = results.specs().size();
+        StringJoiner parts = new StringJoiner(", ");
+        for (SpecStatus s : SpecStatus.values()) {
+            long c = results.specs().stream().filter(r -> r.status() == s).count();
+            if (c > 0 || s == SpecStatus.PASS || s == SpecStatus.FAIL) {
+                parts.add(c + " " + s.key());
+            }
+        }
+        return n + (n == 1 ? " spec: " : " specs: ") + parts;
+    }
+
+    /** What a reviewer reads first in the overview: the first broken criterion, or the first error. */
+    static String headline(SpecResult spec) {
+        if (!spec.errors().isEmpty()) {
+            return spec.errors().get(0).message();
+        }
+        StringJoiner j = new StringJoiner("; ");
+        for (CheckResult c : spec.checks()) {
+            if (c.status() != CheckStatus.PASS) {
+                Units u = SpecViews.units(spec, c);
+                String worst = SpecViews.value(c, u);
+                String at = c.speedRpm().isPresent() ? " at " + Units.number(c.speedRpm().getAsDouble()) + " rpm" : "";
+                j.add(c.criterion() + " " + c.rule() + " " + c.status().key() + ": " + worst + " against "
+                        + SpecViews.value(c.rule(), c.limit(), u) + at);
+            }
+        }
+        return j.length() == 0 ? "" : j.toString();
+    }
+
+    static String where(SourceLocation l) {
+        return l.file() + ":" + l.line() + ":" + l.column();
+    }
+
+    static List<Page.InputRow> inputs(List<InputValue> in) {
+        List<Page.InputRow> out = new ArrayList<>();
+        for (InputValue v : in) {
+            out.add(new Page.InputRow(v.group(), v.label(), v.text(), where(v.location())));
+        }
+        return out;
+    }
+
+    static List<Page.ModeRow> modes(List<ModeResult> modes) {
+        List<Page.ModeRow> out = new ArrayList<>();
+        for (ModeResult m : modes) {
+            StringJoiner shares = new StringJoiner(", ");
+            for (ModeResult.Share s : m.shares()) {
+                shares.add(s.motion() + " " + Math.round(s.fraction() * 100) + " %");
+            }
+            out.add(new Page.ModeRow(Integer.toString(m.index()), Units.number(m.frequencyHz()) + " Hz",
+                    m.dampingRatio().isPresent() ? Units.percent(m.dampingRatio().getAsDouble()) : "–",
+                    shares.toString()));
+        }
+        return out;
+    }
+
+    static List<Page.ErrorRow> errors(List<ErrorEntry> errors) {
+        List<Page.ErrorRow> out = new ArrayList<>();
+        for (ErrorEntry e : errors) {
+            out.add(new Page.ErrorRow(where(e.location()), e.message()));
+        }
+        return out;
+    }
+
+    static Optional<ResponseCurve> curve(SpecResult spec, String criterion) {
+        return spec.details().curves().stream().filter(c -> c.criterion().equals(criterion)).findFirst();
+    }
+}
