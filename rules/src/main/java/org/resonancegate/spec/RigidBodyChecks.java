@@ -57,6 +57,29 @@ final class RigidBodyChecks {
     }
 
     /**
+     * Farthest a mount may sit from the centre of gravity, in metres. The largest machines set on
+     * mounts span some tens of metres (common practice, no source); a mount farther out than this
+     * is almost always a unit slip (millimetres written as metres), and it would make the rocking
+     * stiffness dwarf every other term of the model.
+     */
+    static final double MAX_REACH_M = 100;
+
+    /** Refuses a mount farther than {@link #MAX_REACH_M} from the centre of gravity. */
+    static void reach(Point cg, List<Model.Mount> mounts, Problems problems) {
+        double[] c = cg.si();
+        for (Model.Mount m : mounts) {
+            double[] p = m.position().si();
+            double distance = Math.sqrt(sq(p[0] - c[0]) + sq(p[1] - c[1]) + sq(p[2] - c[2]));
+            if (!(distance <= MAX_REACH_M)) {
+                problems.add(m.position().location(), "mount \"" + m.name() + "\" sits " + number(distance)
+                        + " m from the centre of gravity, beyond the " + number(MAX_REACH_M) + " m a machine on mounts"
+                        + " could span; check the unit of its \"position\" and of \"centreOfGravity\""
+                        + " (millimetres written as metres?)");
+            }
+        }
+    }
+
+    /**
      * Builds the 6×6 stiffness K = Σ T_iᵀ·diag(kx, ky, kz)·T_i about the centre of gravity,
      * T_i = [I₃ | −[r_i]×], and refuses a layout where some motion meets no stiffness. Rotations
      * are scaled by the mounts' rms distance from the centre of gravity, so that translations and
@@ -156,7 +179,9 @@ final class RigidBodyChecks {
     }
 
     private static String number(double v) {
-        return String.format(Locale.ROOT, "%.4g", v).replaceAll("\\.?0+($|e)", "$1");
+        // Only zeros after a decimal point are trailing: "5000" stays 5000.
+        return String.format(Locale.ROOT, "%.4g", v).replaceAll("(\\.\\d*?)0+($|e)", "$1$2")
+                .replaceAll("\\.($|e)", "$1");
     }
 
 }
