@@ -19,6 +19,13 @@ final class RigidBodyChecks {
 
     /** Relative size below which an eigenvalue counts as zero (the stiffness check) or a sum as equal. */
     static final double ZERO = 1e-9;
+    /**
+     * Relative size below which a stiffness eigenvalue means a free motion. Round-off in forming
+     * and solving K leaves a truly free motion near 1e-16 of the largest eigenvalue; 1e-12 keeps
+     * four decades of margin above that and still takes mounts whose stiffnesses differ by nine
+     * decades or more (ZERO, at 1e-9, refused such a layout as free).
+     */
+    static final double FREE = 1e-12;
     private static final String[] MOTIONS = {"translation along x", "translation along y", "translation along z",
             "rotation about x", "rotation about y", "rotation about z"};
 
@@ -118,7 +125,7 @@ final class RigidBodyChecks {
         double largest = Arrays.stream(values).map(Math::abs).max().orElse(0);
         List<double[]> free = new ArrayList<>();
         for (int i = 0; i < values.length; i++) {
-            if (values[i] <= ZERO * largest) {
+            if (values[i] <= FREE * largest) {
                 RealVector v = eigen.getEigenvector(i);
                 free.add(v.unitVector().toArray());
             }
