@@ -19,20 +19,6 @@ import org.resonancegate.report.SpecStatus;
  */
 class NumericalEdgeCasesTest {
 
-    private static SpecResult judged(String text) {
-        SpecResult r = Pipeline.run(text);
-        assertTrue(r.status() != SpecStatus.ERROR, () -> r.errors() + "\n" + text);
-        return r;
-    }
-
-    private static double[] frequencies(SpecResult r) {
-        return r.modes().stream().mapToDouble(ModeResult::frequencyHz).toArray();
-    }
-
-    private static CheckResult check(SpecResult r, String id) {
-        return r.checks().stream().filter(c -> c.criterion().equals(id)).findFirst().orElseThrow();
-    }
-
     private static SpecGenerator.RigidBody box(List<double[]> stiffness, double[] inertia, double[] products) {
         return new SpecGenerator.RigidBody(800, new double[] {0, 0, 0.4}, inertia, products,
                 List.of(new double[] {-0.7, -0.7, 0}, new double[] {0.7, -0.7, 0}, new double[] {-0.7, 0.7, 0},
@@ -41,7 +27,7 @@ class NumericalEdgeCasesTest {
 
     private static void assertModesMatch(SpecGenerator.RigidBody body, double relative) {
         String text = SpecGenerator.rigidBody("EDGE", body);
-        double[] engine = frequencies(judged(text));
+        double[] engine = Pipeline.frequencies(Pipeline.judged(text));
         double[] independent = EdgeCaseModes.frequenciesHz(body);
         assertEquals(6, engine.length);
         for (int i = 0; i < 6; i++) {
@@ -67,7 +53,7 @@ class NumericalEdgeCasesTest {
         assertModesMatch(body, 1e-7);
         // and a hair apart (a product of inertia of 1e-6 kg·m² splits the pair)
         assertModesMatch(box(k, new double[] {150, 150, 250}, new double[] {1e-6, 0, 0}), 1e-7);
-        SpecResult r = judged(SpecGenerator.rigidBody("EDGE", body));
+        SpecResult r = Pipeline.judged(SpecGenerator.rigidBody("EDGE", body));
         for (ModeResult m : r.modes()) {
             double sum = m.shares().stream().mapToDouble(ModeResult.Share::fraction).sum();
             assertTrue(sum <= 1 + 1e-9 && sum > 0.5, m::toString);
@@ -110,13 +96,13 @@ class NumericalEdgeCasesTest {
                 "{\"name\": \"gear mesh\", \"kind\": \"force\", \"order\": 100, \"amplitude\": \"50 N\"}",
                 "{\"id\": \"SEP\", \"rule\": \"separation\", \"margin\": \"10 %\"},"
                         + " {\"id\": \"DISP\", \"rule\": \"displacement\", \"max\": \"1 m\"}");
-        SpecResult r = judged(text);
+        SpecResult r = Pipeline.judged(text);
         // the band 100 × (10…40 rpm) = 16.7…66.7 Hz holds the mode, so the separation is 0 (SPEC-FORMAT.md, separation)
-        assertEquals(0.0, check(r, "SEP").value(), 1e-12);
+        assertEquals(0.0, Pipeline.check(r, "SEP").value(), 1e-12);
         // D_max = 1/(2ζ√(1−ζ²)) times F/k (check-values 1.3)
         double peak = 50 / k / (2 * zeta * Math.sqrt(1 - zeta * zeta));
-        assertEquals(peak, check(r, "DISP").value(), 1e-6 * peak);
-        assertEquals(fn * Math.sqrt(1 - 2 * zeta * zeta) * 60 / 100, check(r, "DISP").speedRpm().orElseThrow(), 1e-4);
+        assertEquals(peak, Pipeline.check(r, "DISP").value(), 1e-6 * peak);
+        assertEquals(fn * Math.sqrt(1 - 2 * zeta * zeta) * 60 / 100, Pipeline.check(r, "DISP").speedRpm().orElseThrow(), 1e-4);
     }
 
     @Test
@@ -136,11 +122,11 @@ class NumericalEdgeCasesTest {
             return;
         }
         double peak = 100 / k / (2 * zeta * Math.sqrt(1 - zeta * zeta)); // check-values 1.3
-        assertEquals(peak, check(r, "DISP").value(), 1e-6 * peak);
+        assertEquals(peak, Pipeline.check(r, "DISP").value(), 1e-6 * peak);
         // T peaks at β_T = √(√(1+8ζ²) − 1)/(2ζ) (check-values 1.9); its height from 1.4
         double bt = Math.sqrt(Math.sqrt(1 + 8 * zeta * zeta) - 1) / (2 * zeta);
         double tmax = Math.sqrt((1 + Math.pow(2 * zeta * bt, 2)) / (Math.pow(1 - bt * bt, 2) + Math.pow(2 * zeta * bt, 2)));
-        assertEquals(tmax, check(r, "ISO").value(), 1e-6 * tmax);
+        assertEquals(tmax, Pipeline.check(r, "ISO").value(), 1e-6 * tmax);
     }
 
     @Test
@@ -154,11 +140,11 @@ class NumericalEdgeCasesTest {
                 "{\"id\": \"DISP\", \"rule\": \"displacement\", \"max\": \"1 m\"},"
                         + " {\"id\": \"ISO\", \"rule\": \"isolation\", \"maxTransmissibility\": 1000},"
                         + " {\"id\": \"SEP\", \"rule\": \"separation\", \"margin\": \"5 %\"}");
-        SpecResult r = judged(text);
+        SpecResult r = Pipeline.judged(text);
         // at β = 1 exactly D = 1/(2ζ) (check-values 1.3) and T = √(1 + 4ζ²)/(2ζ) (1.4 at β = 1)
-        assertEquals(10 / k / (2 * zeta), check(r, "DISP").value(), 1e-6 * 10 / k / (2 * zeta));
+        assertEquals(10 / k / (2 * zeta), Pipeline.check(r, "DISP").value(), 1e-6 * 10 / k / (2 * zeta));
         double t = Math.sqrt(1 + 4 * zeta * zeta) / (2 * zeta);
-        assertEquals(t, check(r, "ISO").value(), 1e-6 * t);
-        assertEquals(0.0, check(r, "SEP").value(), 1e-8);
+        assertEquals(t, Pipeline.check(r, "ISO").value(), 1e-6 * t);
+        assertEquals(0.0, Pipeline.check(r, "SEP").value(), 1e-8);
     }
 }

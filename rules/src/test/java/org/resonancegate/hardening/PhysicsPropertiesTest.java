@@ -24,16 +24,6 @@ import org.resonancegate.report.SpecStatus;
  */
 class PhysicsPropertiesTest {
 
-    private static SpecResult evaluated(String text) {
-        SpecResult r = Pipeline.run(text);
-        assertTrue(r.status() != SpecStatus.ERROR, () -> r.errors() + "\n" + text);
-        return r;
-    }
-
-    private static double[] frequencies(SpecResult r) {
-        return r.modes().stream().mapToDouble(ModeResult::frequencyHz).toArray();
-    }
-
     private static void assertSameFrequencies(double[] expected, double[] actual, double relative, String text) {
         assertEquals(expected.length, actual.length, text);
         for (int i = 0; i < expected.length; i++) {
@@ -41,10 +31,6 @@ class PhysicsPropertiesTest {
             double a = actual[i];
             assertEquals(e, a, relative * Math.max(Math.abs(e), 1e-6), () -> "mode frequencies differ\n" + text);
         }
-    }
-
-    private static CheckResult check(SpecResult r, String id) {
-        return r.checks().stream().filter(c -> c.criterion().equals(id)).findFirst().orElseThrow();
     }
 
     /**
@@ -57,7 +43,7 @@ class PhysicsPropertiesTest {
         SpecGenerator.RigidBody body = SpecGenerator.RigidBody.random(new java.util.Random(seed));
         String before = SpecGenerator.rigidBody("RB", body);
         String after = SpecGenerator.rigidBody("RB", body.scaled(factor, factor));
-        assertSameFrequencies(frequencies(evaluated(before)), frequencies(evaluated(after)), 1e-7, before);
+        assertSameFrequencies(Pipeline.frequencies(Pipeline.judged(before)), Pipeline.frequencies(Pipeline.judged(after)), 1e-7, before);
     }
 
     /** The same property on a single mass and on a lumped line, with units written three ways. */
@@ -68,8 +54,8 @@ class PhysicsPropertiesTest {
         String rest = " \"operation\": {\"speed\": \"1480 rpm\"},\n"
                 + " \"excitations\": [{\"name\": \"rotor\", \"kind\": \"unbalance\", \"unbalance\": \"100 g·mm\"}],\n"
                 + " \"criteria\": [{\"id\": \"SEP\", \"rule\": \"separation\", \"margin\": \"10 %\"}]\n";
-        double[] a = frequencies(evaluated(single(massKg, stiffness, 0.05, rest)));
-        double[] b = frequencies(evaluated(single(massKg * factor, stiffness * factor, 0.05, rest)));
+        double[] a = Pipeline.frequencies(Pipeline.judged(single(massKg, stiffness, 0.05, rest)));
+        double[] b = Pipeline.frequencies(Pipeline.judged(single(massKg * factor, stiffness * factor, 0.05, rest)));
         // the spec text holds 9 significant digits, so the written ratio k/m is exact only to ~1e-9
         assertSameFrequencies(a, b, 1e-8, massKg + " kg, " + stiffness + " N/m, × " + factor);
         // f_n = √(k/m)/2π (check-values 1.1 notation; the single model's one mode)
@@ -97,7 +83,7 @@ class PhysicsPropertiesTest {
                 + " \"excitations\": [{\"name\": \"shaker\", \"kind\": \"force\", \"frequency\": " + SpecGenerator.q(f, "Hz")
                 + ", \"amplitude\": \"100 N\"}],\n"
                 + " \"criteria\": [{\"id\": \"ISO\", \"rule\": \"isolation\", \"maxTransmissibility\": 2}]\n");
-        CheckResult iso = check(evaluated(text), "ISO");
+        CheckResult iso = Pipeline.check(Pipeline.judged(text), "ISO");
         assertEquals(1.0, iso.value(), 1e-6, text);
     }
 
@@ -116,8 +102,8 @@ class PhysicsPropertiesTest {
                 + SpecGenerator.q(fnHz * 60 * 3, "rpm") + "}},\n"
                 + " \"excitations\": [{\"name\": \"drive\", \"kind\": \"force\", \"order\": 1, \"amplitude\": \"100 N\"}],\n"
                 + " \"criteria\": [{\"id\": \"DISP\", \"rule\": \"displacement\", \"max\": \"1 m\"}]\n";
-        double lightly = check(evaluated(single(m, k, zeta, rest)), "DISP").value();
-        double heavily = check(evaluated(single(m, k, Math.min(0.99, zeta * ratio), rest)), "DISP").value();
+        double lightly = Pipeline.check(Pipeline.judged(single(m, k, zeta, rest)), "DISP").value();
+        double heavily = Pipeline.check(Pipeline.judged(single(m, k, Math.min(0.99, zeta * ratio), rest)), "DISP").value();
         assertTrue(heavily <= lightly * (1 + 1e-9), () -> "ζ " + zeta + " → " + lightly + " m; ζ × " + ratio + " → " + heavily + " m");
         // and the lighter peak is the handbook's F/k·1/(2ζ√(1−ζ²)) where that peak exists (ζ < 1/√2)
         double expected = 100 / k / (2 * zeta * Math.sqrt(1 - zeta * zeta));
@@ -143,14 +129,14 @@ class PhysicsPropertiesTest {
         }
         String before = SpecGenerator.rigidBody("RB", body);
         String after = SpecGenerator.rigidBody("RB", moved);
-        assertSameFrequencies(frequencies(evaluated(before)), frequencies(evaluated(after)), 1e-7, before + "\n" + after);
+        assertSameFrequencies(Pipeline.frequencies(Pipeline.judged(before)), Pipeline.frequencies(Pipeline.judged(after)), 1e-7, before + "\n" + after);
     }
 
     /** Whatever valid machine goes in, no value that comes out is NaN or infinite (common practice, no source). */
     @Property(tries = 150)
     void resultsNeverHoldNaNOrInfinity(@ForAll long seed) {
         String text = new SpecGenerator(seed).any("GEN-1");
-        SpecResult r = evaluated(text);
+        SpecResult r = Pipeline.judged(text);
         for (ModeResult m : r.modes()) {
             assertTrue(Double.isFinite(m.frequencyHz()), text);
             m.dampingRatio().ifPresent(z -> assertTrue(Double.isFinite(z), text));

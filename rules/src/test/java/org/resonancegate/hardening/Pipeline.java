@@ -13,8 +13,11 @@ import java.util.stream.Stream;
 
 import org.resonancegate.check.CheckRequest;
 import org.resonancegate.check.CheckRun;
+import org.resonancegate.report.CheckResult;
+import org.resonancegate.report.ModeResult;
 import org.resonancegate.report.Results;
 import org.resonancegate.report.SpecResult;
+import org.resonancegate.report.SpecStatus;
 
 /** Runs spec text through the whole engine (files, reader, dynamics, criteria) in a scratch project. */
 public final class Pipeline {
@@ -38,6 +41,25 @@ public final class Pipeline {
         } finally {
             delete(dir);
         }
+    }
+
+    /** The result for {@code text}, which must be read and judged (not an error). */
+    public static SpecResult judged(String text) {
+        SpecResult r = run(text);
+        if (r.status() == SpecStatus.ERROR) {
+            throw new AssertionError("expected a judged spec, got " + r.errors() + "\n" + text);
+        }
+        return r;
+    }
+
+    /** The natural frequencies of a result, lowest first, in Hz. */
+    public static double[] frequencies(SpecResult r) {
+        return r.modes().stream().mapToDouble(ModeResult::frequencyHz).toArray();
+    }
+
+    /** The check of the criterion {@code id}. */
+    public static CheckResult check(SpecResult r, String id) {
+        return r.checks().stream().filter(c -> c.criterion().equals(id)).findFirst().orElseThrow();
     }
 
     public static void delete(Path dir) {
