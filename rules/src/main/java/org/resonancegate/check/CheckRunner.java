@@ -4,6 +4,7 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.stream.Stream;
 import org.resonancegate.report.ErrorEntry;
 import org.resonancegate.report.Results;
 import org.resonancegate.report.SpecResult;
@@ -22,11 +23,21 @@ public final class CheckRunner {
     }
 
     public static Results run(CheckRequest request, SpecSource source) {
+        return run(request, source, true);
+    }
+
+    /**
+     * Reads the files, then judges the specs, in parallel across the machine's cores when
+     * {@code parallel}. Each spec is judged on its own: the engine keeps no state between specs
+     * (its caches live in one spec's system or rule context), so the only shared thing is the
+     * list of inputs. The results keep the input order and are then sorted by file, so the
+     * output does not depend on which thread finished first.
+     */
+    static Results run(CheckRequest request, SpecSource source, boolean parallel) {
         LocalDate today = LocalDate.now(request.clock());
-        List<SpecResult> results = new ArrayList<>();
-        for (LoadedSpec loaded : source.load(request.projectBase(), request.specFiles())) {
-            results.add(evaluate(loaded, today));
-        }
+        List<LoadedSpec> loaded = source.load(request.projectBase(), request.specFiles());
+        Stream<LoadedSpec> specs = parallel ? loaded.parallelStream() : loaded.stream();
+        List<SpecResult> results = new ArrayList<>(specs.map(l -> evaluate(l, today)).toList());
         results.sort(Comparator.comparing(SpecResult::file));
         return new Results(results);
     }

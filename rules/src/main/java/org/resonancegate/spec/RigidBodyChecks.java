@@ -19,6 +19,13 @@ final class RigidBodyChecks {
 
     /** Relative size below which an eigenvalue counts as zero (the stiffness check) or a sum as equal. */
     static final double ZERO = 1e-9;
+    /**
+     * Relative size below which a stiffness eigenvalue means a free motion. Round-off in forming
+     * and solving K leaves a truly free motion near 1e-16 of the largest eigenvalue; 1e-12 keeps
+     * four decades of margin above that and still takes mounts whose stiffnesses differ by nine
+     * decades or more (ZERO, at 1e-9, refused such a layout as free).
+     */
+    static final double FREE = 1e-12;
     private static final String[] MOTIONS = {"translation along x", "translation along y", "translation along z",
             "rotation about x", "rotation about y", "rotation about z"};
 
@@ -53,6 +60,29 @@ final class RigidBodyChecks {
                     + ", which break the triangle inequality: " + number(principal[0]) + " + " + number(principal[1])
                     + " < " + number(principal[2]) + "; no body has these (each principal moment is at most the sum"
                     + " of the other two); check the moments and products");
+        }
+    }
+
+    /**
+     * Farthest a mount may sit from the centre of gravity, in metres. The largest machines set on
+     * mounts span some tens of metres (common practice, no source); a mount farther out than this
+     * is almost always a unit slip (millimetres written as metres), and it would make the rocking
+     * stiffness dwarf every other term of the model.
+     */
+    static final double MAX_REACH_M = 100;
+
+    /** Refuses a mount farther than {@link #MAX_REACH_M} from the centre of gravity. */
+    static void reach(Point cg, List<Model.Mount> mounts, Problems problems) {
+        double[] c = cg.si();
+        for (Model.Mount m : mounts) {
+            double[] p = m.position().si();
+            double distance = Math.sqrt(sq(p[0] - c[0]) + sq(p[1] - c[1]) + sq(p[2] - c[2]));
+            if (!(distance <= MAX_REACH_M)) {
+                problems.add(m.position().location(), "mount \"" + m.name() + "\" sits " + number(distance)
+                        + " m from the centre of gravity, beyond the " + number(MAX_REACH_M) + " m a machine on mounts"
+                        + " could span; check the unit of its \"position\" and of \"centreOfGravity\""
+                        + " (millimetres written as metres?)");
+            }
         }
     }
 
@@ -95,7 +125,7 @@ final class RigidBodyChecks {
         double largest = Arrays.stream(values).map(Math::abs).max().orElse(0);
         List<double[]> free = new ArrayList<>();
         for (int i = 0; i < values.length; i++) {
-            if (values[i] <= ZERO * largest) {
+            if (values[i] <= FREE * largest) {
                 RealVector v = eigen.getEigenvector(i);
                 free.add(v.unitVector().toArray());
             }
@@ -156,7 +186,9 @@ final class RigidBodyChecks {
     }
 
     private static String number(double v) {
-        return String.format(Locale.ROOT, "%.4g", v).replaceAll("\\.?0+($|e)", "$1");
+        // Only zeros after a decimal point are trailing: "5000" stays 5000.
+        return String.format(Locale.ROOT, "%.4g", v).replaceAll("(\\.\\d*?)0+($|e)", "$1$2")
+                .replaceAll("\\.($|e)", "$1");
     }
 
 }

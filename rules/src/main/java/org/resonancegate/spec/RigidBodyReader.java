@@ -50,6 +50,9 @@ final class RigidBodyReader {
             RigidBodyChecks.inertia(inertia.get(), problems);
         }
         if (problems.count() == before && cg.isPresent()) {
+            RigidBodyChecks.reach(cg.get(), mounts, problems);
+        }
+        if (problems.count() == before && cg.isPresent()) {
             RigidBodyChecks.layout(cg.get(), mounts, model.get("mounts").orElseThrow().location(), problems);
         }
         if (problems.count() != before || mass.isEmpty() || cg.isEmpty() || inertia.isEmpty()

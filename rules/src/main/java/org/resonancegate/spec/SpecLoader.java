@@ -59,6 +59,13 @@ public final class SpecLoader {
         String name = paths.display(file);
         Problems problems = new Problems();
         try {
+            Optional<String> leaves = paths.linkLeavingTheProject(file);
+            if (leaves.isPresent()) {
+                problems.add(new SourceLocation(name, 1, 1), "this spec file is a symbolic link to " + leaves.get()
+                        + ", outside the project; the engine reads only files inside the project, so copy the spec"
+                        + " into the project instead of linking to it");
+                return Optional.of(new Read(name, Optional.empty(), Optional.empty(), Optional.empty(), problems.all()));
+            }
             JsonTreeReader.Result json = JsonTreeReader.read(paths.files(), file, name);
             Optional<JsonNode> root = json.root();
             if (root.isPresent() && isProfile(root.get())) {
