@@ -2,13 +2,16 @@ package org.resonancegate.report;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.StringJoiner;
 
 /**
  * The part of the Markdown summary that says what a change did against its baseline: one line of
  * counts, then a short table of the inputs that changed and the modes that moved, the rest
- * counted. A mode that moved by less than {@link #MODE_SHIFT} is left out of the table: it moved
+ * counted. The same edit made in several places is one row. The inputs that change numbers come
+ * first, then the modes that moved, then the spec's title and revision. A mode that moved by less than {@link #MODE_SHIFT} is left out of the table: it moved
  * because something moved, but it is not what a reviewer needs to see first.
  */
 final class MarkdownChanges {
@@ -35,6 +38,7 @@ final class MarkdownChanges {
                 .append(n[Transition.FIXED.ordinal()]).append(" fixed; ")
                 .append(changed).append(changed == 1 ? " spec changed" : " specs changed").append("**\n\n");
         List<String[]> rows = new ArrayList<>();
+        List<String[]> wording = new ArrayList<>();
         for (SpecChange s : c.specs()) {
             String spec = s.id().orElse(s.file());
             switch (s.kind()) {
@@ -44,15 +48,24 @@ final class MarkdownChanges {
                 default -> {
                 }
             }
+            // the same edit made in several places (four mounts, two axes) is one row
+            Map<String, List<InputChange>> alike = new LinkedHashMap<>();
             for (InputChange i : s.inputs()) {
-                rows.add(new String[] {spec, i.path(), ChangeWords.before(i), ChangeWords.after(i),
-                        i.location().map(l -> l.display()).orElse(s.file())});
+                alike.computeIfAbsent(ChangeWords.before(i) + "\n" + ChangeWords.after(i), k -> new ArrayList<>()).add(i);
+            }
+            for (List<InputChange> group : alike.values()) {
+                InputChange i = group.get(0);
+                String what = i.path() + (group.size() > 1 ? " and " + (group.size() - 1) + " more alike" : "");
+                (wordingOnly(i) ? wording : rows).add(new String[] {spec, what, ChangeWords.before(i),
+                        ChangeWords.after(i), i.location().map(l -> l.display()).orElse(s.file())});
             }
             s.modes().stream().filter(MarkdownChanges::matters)
                     .sorted(Comparator.comparingDouble(MarkdownChanges::shift).reversed())
                     .forEach(m -> rows.add(new String[] {spec, "mode " + m.index(), ChangeWords.hz(m.baselineHz()),
                             ChangeWords.hz(m.currentHz()) + ChangeWords.change(m.baselineHz(), m.currentHz()), ""}));
         }
+        // words that describe the spec (its title, revision) come after what moves the physics
+        rows.addAll(wording);
         if (rows.isEmpty()) {
             return;
         }
@@ -87,6 +100,11 @@ final class MarkdownChanges {
             md.append("Fixed since ").append(MarkdownSummary.cell(c.ref(), MAX_TEXT)).append(": ").append(j)
                     .append(".\n\n");
         }
+    }
+
+    /** An input that only names or describes the spec: it changes no number the engine uses. */
+    private static boolean wordingOnly(InputChange i) {
+        return i.path().equals("title") || i.path().equals("revision");
     }
 
     private static boolean matters(ModeChange m) {

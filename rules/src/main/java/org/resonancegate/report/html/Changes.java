@@ -52,7 +52,7 @@ final class Changes {
         for (ModeChange m : s.modes()) {
             if (m.moved()) {
                 modes.add(new Page.ModeDelta(Integer.toString(m.index()), ChangeWords.hz(m.baselineHz()),
-                        ChangeWords.hz(m.currentHz()), ChangeWords.change(m.baselineHz(), m.currentHz()).trim()));
+                        ChangeWords.hz(m.currentHz()), ChangeWords.change(m.baselineHz(), m.currentHz()).replaceAll("[ ()]+$|^[ (]+", "")));
             }
         }
         List<Page.CriterionDelta> criteria = new ArrayList<>();
