@@ -90,12 +90,17 @@ final class InterferencePlot {
             }
         }
         if (was.isPresent()) {
-            for (Interference.ModeLine m : was.get().modes()) {
+            List<Interference.ModeLine> old = new ArrayList<>(was.get().modes());
+            old.sort(java.util.Comparator.comparingDouble(Interference.ModeLine::frequencyHz));
+            double wasLabelY = Double.POSITIVE_INFINITY;
+            for (Interference.ModeLine m : old) {
                 double f = m.frequencyHz();
                 if (f > 0 && f <= fmax) {
                     b.line(x0, ys.at(f), x1, ys.at(f), "was");
-                    b.text(x0 + 4, ys.at(f) - 3, "start", "lbl was-lbl", 0,
-                            "mode " + m.index() + " at " + was.get().ref() + " · " + Units.number(f) + " Hz");
+                    // lowest first, each label kept clear of the one below; the legend names the revision
+                    wasLabelY = Math.min(ys.at(f) - 3, wasLabelY - 11);
+                    b.text(x0 + 4, wasLabelY, "start", "lbl was-lbl", 0,
+                            "mode " + m.index() + " was " + Units.number(f) + " Hz");
                 }
             }
         }

@@ -34,7 +34,7 @@ class BaselineOverlayTest {
         assertEquals(yOf(svg, old), Double.parseDouble(was.get(0).y1()), 0.15);
         Svg.Line mode = svg.lines().stream().filter(l -> l.cls().equals("mode")).findFirst().orElseThrow();
         assertEquals(yOf(svg, now), Double.parseDouble(mode.y1()), 0.15);
-        assertTrue(svg.texts().stream().anyMatch(t -> t.text().equals("mode 1 at HEAD · 31.83 Hz")));
+        assertTrue(svg.texts().stream().anyMatch(t -> t.text().equals("mode 1 was 31.83 Hz")));
         assertTrue(p1.legend().stream().anyMatch(l -> l.cls().equals("was") && l.text().startsWith("at HEAD: ")));
         // without a baseline there is nothing to overlay
         Svg plain = Pages.of(new Results(r.specs())).specs().get(0).interference().orElseThrow().svg();
