@@ -41,16 +41,9 @@ class BaselineOverlayTest {
         assertTrue(plain.lines().stream().noneMatch(l -> l.cls().equals("was")));
     }
 
-    /** The y of frequency {@code hz}, from the frequency-axis ticks labelled 0 and 30 (bracketing both modes' scale). */
+    /** The y of frequency {@code hz}, from the frequency-axis ticks labelled 0 and 30 (both modes lie below 40 Hz). */
     private static double yOf(Svg svg, double hz) {
-        double y0 = tickY(svg, "0");
-        double y30 = tickY(svg, "30");
-        return y0 + (y30 - y0) * hz / 30;
-    }
-
-    private static double tickY(Svg svg, String label) {
-        // a y tick's label sits 4 px below its grid line
-        return svg.texts().stream().filter(t -> t.cls().equals("tick") && t.anchor().equals("end")
-                && t.text().equals(label)).map(t -> Double.parseDouble(t.y()) - 4).findFirst().orElseThrow();
+        double y0 = PlotGeometryTest.tickY(svg, "0");
+        return y0 + (PlotGeometryTest.tickY(svg, "30") - y0) * hz / 30;
     }
 }
