@@ -24,6 +24,10 @@ import javax.xml.stream.XMLStreamWriter;
  *     warning-severity criterion does not fail its spec, and CI servers count any
  *     {@code <failure>} as one.</li>
  * <li>A spec in {@code error}: one test case per diagnostic, each with an {@code <error>}.</li>
+ * <li>With a baseline, each criterion's test case has a {@code <properties>} block with its
+ *     {@code transition} ({@code new}, {@code carried-over}, {@code fixed}, {@code pass}), and a
+ *     failure's message ends with it in brackets. Test names stay as they are, so a CI server
+ *     keeps tracking the same test across builds.</li>
  * </ul>
  * Written with the JDK's streaming XML writer, so markup in user text is escaped; characters XML
  * cannot hold are replaced ({@link XmlText}). No {@code time} or {@code timestamp} attributes:
@@ -49,7 +53,7 @@ public final class JunitReport {
             x.writeAttribute("name", EngineInfo.NAME);
             counts(x, Counts.of(results));
             for (SpecResult spec : results.specs()) {
-                suite(x, spec);
+                suite(x, spec, results);
             }
             x.writeCharacters("\n");
             x.writeEndElement();
@@ -68,7 +72,7 @@ public final class JunitReport {
         AtomicWrite.write(target, toBytes(results));
     }
 
-    private static void suite(XMLStreamWriter x, SpecResult spec) throws XMLStreamException {
+    private static void suite(XMLStreamWriter x, SpecResult spec, Results results) throws XMLStreamException {
         String className = spec.id().orElse(spec.file());
         x.writeCharacters("\n  ");
         x.writeStartElement("testsuite");
@@ -90,12 +94,21 @@ public final class JunitReport {
         }
         for (CheckResult check : spec.checks()) {
             testCase(x, className, check.criterion() + " " + check.rule(), spec.file());
+            java.util.Optional<Transition> transition = ChangeWords.transition(results.baseline(), spec, check);
+            if (transition.isPresent()) {
+                x.writeCharacters("\n      ");
+                x.writeStartElement("properties");
+                property(x, "transition", transition.get().key());
+                x.writeCharacters("\n      ");
+                x.writeEndElement();
+            }
+            String tag = transition.filter(t -> t != Transition.PASS).map(ComparisonConsole::tag).orElse("");
             String located = check.location().display() + ": " + check.message();
             switch (check.status()) {
                 case PASS -> {
-                    // a passing test case has no child
+                    // a passing test case has no outcome element
                 }
-                case FAIL -> outcome(x, "failure", check.message(), check.rule(), located);
+                case FAIL -> outcome(x, "failure", check.message() + tag, check.rule(), located + tag);
                 case WAIVED -> {
                     x.writeCharacters("\n      ");
                     x.writeStartElement("skipped");
@@ -107,11 +120,11 @@ public final class JunitReport {
                 case WARNING -> {
                     x.writeCharacters("\n      ");
                     x.writeStartElement("system-out");
-                    x.writeCharacters(XmlText.legal("warning (does not fail the spec): " + located));
+                    x.writeCharacters(XmlText.legal("warning (does not fail the spec): " + located + tag));
                     x.writeEndElement();
                 }
             }
-            x.writeCharacters(check.status() == CheckStatus.PASS ? "" : "\n    ");
+            x.writeCharacters(check.status() == CheckStatus.PASS && transition.isEmpty() ? "" : "\n    ");
             x.writeEndElement();
         }
         x.writeCharacters("\n  ");

@@ -11,6 +11,11 @@ import java.util.Optional;
  * what needs a look (failed, warning and waived criteria, and diagnostics, the most serious
  * first) with the file and line of each, a pointer to the full report, and the caution.
  *
+ * <p>With a baseline the summary leads with what the change did: one line of counts against the
+ * revision, a short table of the inputs that changed and the modes that moved, and a column with
+ * each finding's transition ({@code new}, {@code carried over}) in the findings table; criteria
+ * fixed since the baseline are named below it.
+ *
  * <p>All user text is escaped ({@link MarkdownText}) and long text is cut, so a hostile or very
  * long spec name can neither inject markup nor push the table off the screen. Deterministic:
  * {@code "\n"} line ends, no dates.
@@ -37,15 +42,24 @@ public final class MarkdownSummary {
     public static String render(Results results, String title, Optional<String> reportHref) {
         StringBuilder md = new StringBuilder();
         md.append("### ").append(MarkdownText.escape(MarkdownText.shorten(title, MAX_MESSAGE))).append("\n\n");
+        results.baseline().ifPresent(c -> MarkdownChanges.lead(c, reportHref.isPresent(), md));
         md.append("**").append(ConsoleReport.countLine(results, false).text()).append("**\n\n"); // our own words, no markup in them
         List<ReportRow> rows = ReportRow.bySeriousness(results);
+        boolean since = results.baseline().isPresent();
         if (rows.isEmpty()) {
             md.append(results.specs().isEmpty() ? "" : "Every criterion passes.\n\n");
         } else {
-            md.append("| status | spec | criterion | rule | where | finding |\n");
-            md.append("|---|---|---|---|---|---|\n");
+            md.append(since ? "| status | since " + cell(results.baseline().get().ref(), MAX_NAME) + " " : "| status ")
+                    .append("| spec | criterion | rule | where | finding |\n");
+            md.append(since ? "|---|---|---|---|---|---|---|\n" : "|---|---|---|---|---|---|\n");
             for (ReportRow row : rows.subList(0, Math.min(rows.size(), MAX_ROWS))) {
-                md.append("| ").append(row.status())
+                md.append("| ").append(row.status());
+                if (since) {
+                    md.append(" | ").append(row.check()
+                            .flatMap(c -> ChangeWords.transition(results.baseline(), row.spec(), c))
+                            .filter(t -> t != Transition.PASS).map(Transition::words).orElse("–"));
+                }
+                md
                         .append(" | ").append(cell(row.specName(), MAX_NAME))
                         .append(" | ").append(row.check().map(c -> cell(c.criterion(), MAX_NAME)).orElse("–"))
                         .append(" | ").append(row.check().map(c -> cell(c.rule(), MAX_NAME)).orElse("spec error"))
@@ -61,6 +75,7 @@ public final class MarkdownSummary {
                         .append(reportHref.isPresent() ? " in the full report.\n\n" : ", not listed here.\n\n");
             }
         }
+        results.baseline().ifPresent(c -> MarkdownChanges.fixed(c, md));
         reportHref.ifPresent(href -> md.append("Full report: [").append(MarkdownText.escape(href)).append("](")
                 .append(linkTarget(href)).append(")\n\n"));
         md.append("*").append(ConsoleReport.CAUTION).append("*\n");
@@ -77,7 +92,7 @@ public final class MarkdownSummary {
         AtomicWrite.write(target, toBytes(results, title, reportHref));
     }
 
-    private static String cell(String text, int max) {
+    static String cell(String text, int max) {
         return MarkdownText.escape(MarkdownText.shorten(text, max));
     }
 

@@ -15,8 +15,11 @@ import java.util.SortedMap;
 @JsonPropertyOrder({"$schema", "version", "runs"})
 record SarifLog(@JsonProperty("$schema") String schema, String version, List<Run> runs) {
 
-    @JsonPropertyOrder({"tool", "originalUriBaseIds", "columnKind", "results"})
-    record Run(Tool tool, SortedMap<String, UriBase> originalUriBaseIds, String columnKind, List<Result> results) {
+    /** {@code properties}: the baseline the {@code baselineState}s were computed against, when there was one. */
+    @JsonInclude(JsonInclude.Include.NON_ABSENT)
+    @JsonPropertyOrder({"tool", "originalUriBaseIds", "columnKind", "results", "properties"})
+    record Run(Tool tool, SortedMap<String, UriBase> originalUriBaseIds, String columnKind, List<Result> results,
+               Optional<SortedMap<String, Object>> properties) {
     }
 
     record Tool(Driver driver) {
@@ -40,11 +43,11 @@ record SarifLog(@JsonProperty("$schema") String schema, String version, List<Run
     }
 
     @JsonInclude(JsonInclude.Include.NON_ABSENT)
-    @JsonPropertyOrder({"ruleId", "ruleIndex", "level", "message", "locations", "suppressions",
+    @JsonPropertyOrder({"ruleId", "ruleIndex", "level", "message", "locations", "suppressions", "baselineState",
         "partialFingerprints", "properties"})
     record Result(String ruleId, int ruleIndex, String level, Message message, List<Location> locations,
-                  Optional<List<Suppression>> suppressions, SortedMap<String, String> partialFingerprints,
-                  SortedMap<String, String> properties) {
+                  Optional<List<Suppression>> suppressions, Optional<String> baselineState,
+                  SortedMap<String, String> partialFingerprints, SortedMap<String, String> properties) {
     }
 
     record Message(String text) {

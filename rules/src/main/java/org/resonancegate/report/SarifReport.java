@@ -30,6 +30,16 @@ import tools.jackson.databind.json.JsonMapper;
  *     declares without an absolute path (the consumer knows where the checkout is), so the file
  *     is the same on every machine. Columns count UTF-16 code units, SARIF's default
  *     {@code columnKind}, which is how the spec reader counts them.</li>
+ * <li>With a baseline, every result carries SARIF's own {@code baselineState}: {@code new} for a
+ *     criterion that fails now and did not at the baseline (or a diagnostic the baseline did not
+ *     have), {@code unchanged} for one carried over with the same status, value and limit,
+ *     {@code updated} for one carried over whose value, limit or status moved. The standard's
+ *     fourth state, {@code absent} (found at the baseline, not now), is not written: a fixed
+ *     criterion would need a result of its own, on a line where nothing is wrong, and viewers that
+ *     ignore {@code baselineState} (several code-review tools do) would show it as an open
+ *     finding. Fixed criteria are named in the run's {@code properties} instead, with the
+ *     revision and commit compared against. The standard's {@code run.baselineGuid} names an
+ *     earlier SARIF run; the baseline here is a Git revision, judged afresh, so it is not set.</li>
  * </ul>
  * Deterministic: fixed property order, sorted maps, {@code "\n"} line ends, no timestamps.
  */
@@ -80,20 +90,63 @@ public final class SarifReport {
                 throw new IllegalStateException("criterion kind '" + ruleId + "' has no SARIF rule; add it to "
                         + "SarifReport.description");
             }
-            out.add(result(row, ruleId, ruleIndex));
+            Optional<Transition> transition = row.check()
+                    .flatMap(c -> ChangeWords.transition(results.baseline(), row.spec(), c));
+            out.add(result(row, ruleId, ruleIndex, baselineState(results.baseline(), row), transition));
         }
         SortedMap<String, SarifLog.UriBase> bases = new TreeMap<>();
         bases.put(PROJECT_ROOT, new SarifLog.UriBase(new SarifLog.Message(
                 "The base directory of the Maven project that was checked.")));
         SarifLog.Driver driver = new SarifLog.Driver(EngineInfo.NAME, EngineInfo.version(), List.copyOf(rules));
         return new SarifLog(SCHEMA, "2.1.0", List.of(new SarifLog.Run(new SarifLog.Tool(driver), bases,
-                "utf16CodeUnits", List.copyOf(out))));
+                "utf16CodeUnits", List.copyOf(out), results.baseline().map(SarifReport::baselineProperties))));
     }
 
-    private static SarifLog.Result result(ReportRow row, String ruleId, int ruleIndex) {
+    /**
+     * The state against the baseline, in SARIF's words: a failing criterion by its transition; a
+     * waived one (which is not failing) as {@code new} if the baseline did not judge it; a
+     * diagnostic as {@code unchanged} if the baseline spec had the same one, else {@code new}.
+     */
+    static Optional<String> baselineState(Optional<Comparison> comparison, ReportRow row) {
+        if (comparison.isEmpty()) {
+            return Optional.empty();
+        }
+        if (row.check().isEmpty()) {
+            boolean before = comparison.get().specs().stream()
+                    .filter(s -> s.currentFile().filter(row.spec().file()::equals).isPresent())
+                    .flatMap(s -> s.baselineErrors().stream())
+                    .anyMatch(e -> e.message().equals(row.message()));
+            return Optional.of(before ? "unchanged" : "new");
+        }
+        Optional<CriterionChange> change = comparison.get().criterion(row.spec().file(), row.check().get().criterion());
+        if (change.isEmpty() || change.get().baselineStatus().isEmpty() || change.get().transition() == Transition.NEW) {
+            return Optional.of("new");
+        }
+        return Optional.of(change.get().changed() ? "updated" : "unchanged");
+    }
+
+    private static SortedMap<String, Object> baselineProperties(Comparison c) {
+        List<String> fixed = new ArrayList<>();
+        for (SpecChange s : c.specs()) {
+            for (CriterionChange k : s.criteria()) {
+                if (k.transition() == Transition.FIXED) {
+                    fixed.add(s.id().orElse(s.file()) + " " + k.criterion() + " " + k.rule() + " (" + s.file() + ")");
+                }
+            }
+        }
+        SortedMap<String, Object> p = new TreeMap<>();
+        p.put("baselineRef", c.ref());
+        p.put("baselineCommit", c.commit());
+        p.put("fixedSinceBaseline", List.copyOf(fixed));
+        return p;
+    }
+
+    private static SarifLog.Result result(ReportRow row, String ruleId, int ruleIndex, Optional<String> baselineState,
+                                          Optional<Transition> transition) {
         StringBuilder text = new StringBuilder(row.specName());
         row.judgedFile().ifPresent(f -> text.append(" [").append(f).append(']'));
-        row.check().ifPresent(c -> text.append(' ').append(c.criterion()).append(' ').append(c.rule()).append(':'));
+        row.check().ifPresent(c -> text.append(' ').append(c.criterion()).append(' ').append(c.rule())
+                .append(transition.filter(t -> t != Transition.PASS).map(ComparisonConsole::tag).orElse("")).append(':'));
         text.append(' ').append(row.message());
         boolean warning = row.check().map(c -> c.severity() == Severity.WARNING).orElse(false);
         if (warning && row.check().get().status() == CheckStatus.WARNING) {
@@ -113,8 +166,9 @@ public final class SarifReport {
         row.spec().id().ifPresent(id -> properties.put("specId", id));
         row.check().ifPresent(c -> properties.put("criterion", c.criterion()));
         properties.put("status", row.status());
+        transition.ifPresent(t -> properties.put("transition", t.key()));
         return new SarifLog.Result(ruleId, ruleIndex, warning ? "warning" : "error",
-                new SarifLog.Message(text.toString()), List.of(location(row.location())), suppressions,
+                new SarifLog.Message(text.toString()), List.of(location(row.location())), suppressions, baselineState,
                 fingerprints, properties);
     }
 

@@ -21,10 +21,10 @@ import org.resonancegate.report.Results;
  * A real Git repository in a temporary folder, built with JGit: write files, commit them at a
  * chosen time, then judge the working tree against a revision as the plugin would.
  */
-final class GitProject implements AutoCloseable {
+public final class GitProject implements AutoCloseable {
 
     /** A single mass under one unbalance over 900–1480 rpm, with a 20 % separation margin. */
-    static String spec(String id, String stiffness, String extra) {
+    public static String spec(String id, String stiffness, String extra) {
         return """
                 {
                   "format": "resonance-gate/1",
@@ -42,7 +42,7 @@ final class GitProject implements AutoCloseable {
     final Git git;
 
     /** @param projectDir the Maven project's folder inside the work tree ("" for the root) */
-    GitProject(Path workTree, String projectDir) {
+    public GitProject(Path workTree, String projectDir) {
         try {
             this.workTree = workTree;
             this.project = projectDir.isEmpty() ? workTree : workTree.resolve(projectDir);
@@ -53,7 +53,7 @@ final class GitProject implements AutoCloseable {
         }
     }
 
-    Path write(String relative, String content) {
+    public Path write(String relative, String content) {
         try {
             Path file = project.resolve(relative);
             Files.createDirectories(file.getParent());
@@ -73,7 +73,7 @@ final class GitProject implements AutoCloseable {
     }
 
     /** Stages everything (deletions too) and commits it at {@code when}. */
-    String commit(String message, Instant when) {
+    public String commit(String message, Instant when) {
         try {
             git.add().addFilepattern(".").call();
             git.add().addFilepattern(".").setUpdate(true).call();
@@ -98,7 +98,7 @@ final class GitProject implements AutoCloseable {
     }
 
     /** The current run, compared with {@code ref}. */
-    Results judge(String ref, java.time.Clock clock) throws BaselineException {
+    public Results judge(String ref, java.time.Clock clock) throws BaselineException {
         CheckRequest request = new CheckRequest(project, specFiles(), clock);
         Results current = CheckRun.run(request);
         Predicate<String> json = p -> p.endsWith(".json");

@@ -2,6 +2,7 @@ package org.resonancegate.report.html;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.resonancegate.criteria.ResponseCurves;
 import org.resonancegate.report.Interference;
 
@@ -10,10 +11,24 @@ import org.resonancegate.report.Interference;
  * each order of running speed as a line through the origin (f = k·n/60), the operating range
  * shaded, and a marker where an order meets a mode (n = 60·f/k): filled and ringed where the
  * band it enters overlaps the operating range, which is what the separation rule forbids.
+ *
+ * <p>With a baseline, the modes that moved are drawn again, dashed, at their frequency at the
+ * baseline, so a reviewer sees where a mode came from on its way into (or out of) a band.
  */
 final class InterferencePlot {
 
     static final int H = 330;
+
+    /**
+     * The baseline's frequencies of the modes that moved since, and the revision they are from.
+     * These are nominal frequencies (the comparison keeps nominal modes), while the solid lines
+     * are those of the case the diagram is drawn for; the legend says so.
+     */
+    record Baseline(String ref, List<Interference.ModeLine> modes) {
+        Baseline {
+            modes = List.copyOf(modes);
+        }
+    }
 
     private InterferencePlot() {
     }
@@ -22,9 +37,9 @@ final class InterferencePlot {
         return "x" + (i % 5);
     }
 
-    static List<Page.Legend> legend(Interference d) {
+    static List<Page.Legend> legend(Interference d, Optional<Baseline> was) {
         List<Page.Legend> out = new ArrayList<>();
-        double reach = frequencyReach(d, d.margin().orElse(0));
+        double reach = frequencyReach(d, d.margin().orElse(0), was);
         for (int i = 0; i < d.excitations().size(); i++) {
             Interference.ExcitationLine e = d.excitations().get(i);
             String what = e.order().isPresent() ? order(e.order().getAsDouble()) + " running speed"
@@ -32,6 +47,9 @@ final class InterferencePlot {
                     + (e.frequencyHz().getAsDouble() > reach ? " (above the plotted frequencies)" : "");
             out.add(new Page.Legend(excitationClass(i), what + ": " + e.name()));
         }
+        was.filter(w -> !w.modes().isEmpty()).ifPresent(w -> out.add(new Page.Legend("was", "at " + w.ref()
+                + ": the nominal frequency of each mode that moved since"
+                + (d.basis().equals("nominal") ? "" : " (the solid lines are the " + d.basis() + " case)"))));
         return out;
     }
 
@@ -40,9 +58,13 @@ final class InterferencePlot {
     }
 
     static Svg draw(Interference d, String clipId) {
+        return draw(d, clipId, Optional.empty());
+    }
+
+    static Svg draw(Interference d, String clipId, Optional<Baseline> was) {
         double xmax = d.maxSpeedRpm() > 0 ? ResponseCurves.REACH * d.maxSpeedRpm() : 100;
         double margin = d.margin().orElse(0);
-        double fmax = frequencyReach(d, margin);
+        double fmax = frequencyReach(d, margin, was);
         double x0 = Frames.LEFT;
         double x1 = Frames.W - Frames.RIGHT;
         double y0 = H - Frames.BOTTOM;
@@ -65,6 +87,21 @@ final class InterferencePlot {
                 labelY = Math.min(ys.at(f) + 4, labelY - 12);
                 b.text(x1 + 6, labelY, "start", "lbl mode-lbl", 0,
                         "mode " + m.index() + " · " + Units.number(f) + " Hz");
+            }
+        }
+        if (was.isPresent()) {
+            List<Interference.ModeLine> old = new ArrayList<>(was.get().modes());
+            old.sort(java.util.Comparator.comparingDouble(Interference.ModeLine::frequencyHz));
+            double wasLabelY = Double.POSITIVE_INFINITY;
+            for (Interference.ModeLine m : old) {
+                double f = m.frequencyHz();
+                if (f > 0 && f <= fmax) {
+                    b.line(x0, ys.at(f), x1, ys.at(f), "was");
+                    // lowest first, each label kept clear of the one below; the legend names the revision
+                    wasLabelY = Math.min(ys.at(f) - 3, wasLabelY - 11);
+                    b.text(x0 + 4, wasLabelY, "start", "lbl was-lbl", 0,
+                            "mode " + m.index() + " was " + Units.number(f) + " Hz");
+                }
             }
         }
         for (int i = 0; i < d.excitations().size(); i++) {
@@ -95,10 +132,13 @@ final class InterferencePlot {
      * high order (a gear mesh far above every mode) does not squash the modes into the axis; the
      * order lines are clipped at the top. Excitations reaching up to twice that are shown whole.
      */
-    private static double frequencyReach(Interference d, double margin) {
+    private static double frequencyReach(Interference d, double margin, Optional<Baseline> was) {
         double modes = 0;
         for (Interference.ModeLine m : d.modes()) {
             modes = Math.max(modes, m.frequencyHz() * (1 + margin));
+        }
+        for (Interference.ModeLine m : was.map(Baseline::modes).orElse(List.of())) {
+            modes = Math.max(modes, m.frequencyHz());
         }
         double excitations = 0;
         for (Interference.ExcitationLine e : d.excitations()) {

@@ -7,12 +7,38 @@ import java.util.Optional;
  * Everything the page template shows, already worded: the template only places and escapes it.
  * Status words double as style classes ("pass", "fail", "warning", "waived", "error").
  */
-public record Page(String heading, String summary, String summaryStatus, String caution, List<Row> overview,
-                   List<SpecView> specs) {
+public record Page(String heading, String summary, String summaryStatus, String caution, Optional<Changes> changes,
+                   List<Row> overview, List<SpecView> specs) {
+
+    /**
+     * What changed since the baseline, shown near the top: the revision, a line of counts and a
+     * block per spec that changed, appeared, went away or moved.
+     */
+    public record Changes(String ref, String commit, String judgedOn, String lead, List<String> notes,
+                          List<SpecDelta> specs) {
+    }
+
+    /** {@code anchor}: the spec's section on this page, empty for a removed spec. */
+    public record SpecDelta(String anchor, String name, String kind, String file, String status,
+                            List<ErrorRow> baselineErrors, List<InputDelta> inputs, List<ModeDelta> modes,
+                            List<CriterionDelta> criteria) {
+    }
+
+    public record InputDelta(String path, String before, String after, String where) {
+    }
+
+    public record ModeDelta(String index, String before, String after, String change) {
+    }
+
+    /** {@code transition}: the style class and word ({@code new}, {@code carried-over}, ...). */
+    public record CriterionDelta(String criterion, String rule, String transition, String transitionWords,
+                                 String status, String value, String limit, String margin) {
+    }
 
     /** One line of the overview table. */
+    /** {@code change}: the spec's change since the baseline ("changed", "added", ...), empty without one. */
     public record Row(String anchor, String id, String title, String file, String status, long pass, long fail,
-                      long warning, long waived, int errors, String headline) {
+                      long warning, long waived, int errors, String headline, String change) {
     }
 
     public record SpecView(String anchor, String id, String title, String revision, String file, String status,
@@ -27,10 +53,14 @@ public record Page(String heading, String summary, String summaryStatus, String 
     public record ModeRow(String index, String frequency, String damping, String shares) {
     }
 
-    /** {@code marginStatus}: "pass" with room to spare, "fail" past the limit. */
+    /**
+     * {@code marginStatus}: "pass" with room to spare, "fail" past the limit. {@code transition}:
+     * since the baseline ({@code new}, {@code carried-over}, {@code fixed}), empty without one or
+     * for a criterion that passes on both sides.
+     */
     public record CheckRow(String criterion, String rule, String severity, String status, String worst, String limit,
                            String margin, String marginStatus, String speed, String frequency, String where,
-                           String basis, String message) {
+                           String basis, String message, String transition, String transitionWords) {
     }
 
     public record ErrorRow(String where, String message) {

@@ -1,7 +1,9 @@
 package org.resonancegate.report.html;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.StringJoiner;
 import org.resonancegate.report.CheckResult;
@@ -25,20 +27,23 @@ final class Pages {
     static Page of(Results results) {
         List<Page.Row> rows = new ArrayList<>();
         List<Page.SpecView> specs = new ArrayList<>();
+        Map<String, String> anchors = new HashMap<>();
         for (int i = 0; i < results.specs().size(); i++) {
             SpecResult spec = results.specs().get(i);
             String anchor = "spec-" + (i + 1);
+            anchors.put(spec.file(), anchor);
             rows.add(new Page.Row(anchor, spec.id().orElse("(no id)"), spec.details().title().orElse(""), spec.file(),
                     spec.status().key(), count(spec, CheckStatus.PASS), count(spec, CheckStatus.FAIL),
                     count(spec, CheckStatus.WARNING), count(spec, CheckStatus.WAIVED), spec.errors().size(),
-                    headline(spec)));
-            specs.add(SpecViews.of(spec, anchor, i + 1));
+                    headline(spec), Changes.kind(results.baseline(), spec.file())));
+            specs.add(SpecViews.of(spec, anchor, i + 1, results.baseline()));
         }
         long failing = results.specs().stream()
                 .filter(s -> s.status() == SpecStatus.FAIL || s.status() == SpecStatus.ERROR).count();
         String status = failing > 0 ? "fail"
                 : results.specs().stream().anyMatch(s -> s.status() == SpecStatus.WAIVED) ? "waived" : "pass";
-        return new Page("Vibration check", summary(results), status, ConsoleReport.CAUTION, rows, specs);
+        return new Page("Vibration check", summary(results), status, ConsoleReport.CAUTION,
+                results.baseline().map(c -> Changes.of(c, anchors)), rows, specs);
     }
 
     private static long count(SpecResult spec, CheckStatus status) {

@@ -4,11 +4,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.StringJoiner;
+import org.resonancegate.report.ChangeWords;
 import org.resonancegate.report.CheckResult;
 import org.resonancegate.report.CheckStatus;
+import org.resonancegate.report.Comparison;
 import org.resonancegate.report.Interference;
 import org.resonancegate.report.ResponseCurve;
 import org.resonancegate.report.SpecResult;
+import org.resonancegate.report.Transition;
 
 /** One spec's section: identity, inputs, modes, criteria, diagnostics, waivers and the two plots. */
 final class SpecViews {
@@ -16,11 +19,12 @@ final class SpecViews {
     private SpecViews() {
     }
 
-    static Page.SpecView of(SpecResult spec, String anchor, int number) {
+    static Page.SpecView of(SpecResult spec, String anchor, int number, Optional<Comparison> baseline) {
         List<Page.CheckRow> checks = new ArrayList<>();
         List<Page.WaiverRow> waivers = new ArrayList<>();
         for (CheckResult c : spec.checks()) {
-            checks.add(row(spec, c));
+            Optional<Transition> t = ChangeWords.transition(baseline, spec, c).filter(x -> x != Transition.PASS);
+            checks.add(row(spec, c, t));
             c.waiver().ifPresent(w -> waivers.add(new Page.WaiverRow(c.criterion(), w.reason(), w.expires().toString(),
                     w.valid() ? "in force" : "expired", Pages.where(w.location()))));
         }
@@ -34,9 +38,10 @@ final class SpecViews {
                     + (d.margin().isPresent() ? "; bands ± " + Units.percent(d.margin().getAsDouble())
                     + " around each mode" : "; no separation criterion, so no bands")
                     + ". A ringed marker: an order meets a mode's band inside the operating range.";
+            Optional<InterferencePlot.Baseline> was = Changes.overlay(baseline, spec.file());
             interference = Optional.of(new Page.PlotView("Interference diagram", note,
-                    InterferencePlot.draw(d, "p" + number + "i")));
-            legend = InterferencePlot.legend(d);
+                    InterferencePlot.draw(d, "p" + number + "i", was)));
+            legend = InterferencePlot.legend(d, was);
             int k = 0;
             for (ResponseCurve curve : spec.details().curves()) {
                 Optional<CheckResult> check = spec.checks().stream()
@@ -86,7 +91,7 @@ final class SpecViews {
         return rule.equals("separation") ? Units.percent(v) : u.format(v);
     }
 
-    private static Page.CheckRow row(SpecResult spec, CheckResult c) {
+    private static Page.CheckRow row(SpecResult spec, CheckResult c, Optional<Transition> transition) {
         Units u = units(spec, c);
         boolean exceeded = c.status() != CheckStatus.PASS;
         // which side the bound is on follows from the verdict: a pass below the limit is an upper bound
@@ -101,6 +106,7 @@ final class SpecViews {
                 margin, exceeded ? "fail" : "pass",
                 c.speedRpm().isPresent() ? Units.number(c.speedRpm().getAsDouble()) + " rpm" : "–",
                 c.frequencyHz().isPresent() ? Units.number(c.frequencyHz().getAsDouble()) + " Hz" : "–",
-                Pages.where(c.location()), c.governingCase().orElse("–"), c.message());
+                Pages.where(c.location()), c.governingCase().orElse("–"), c.message(),
+                transition.map(Transition::key).orElse(""), transition.map(Transition::words).orElse(""));
     }
 }

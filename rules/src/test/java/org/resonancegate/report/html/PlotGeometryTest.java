@@ -97,13 +97,13 @@ class PlotGeometryTest {
     }
 
     /** The y of frequency {@code hz}, from the frequency-axis ticks labelled 0 and 10. */
-    private static double yOf(Svg svg, double hz) {
+    static double yOf(Svg svg, double hz) {
         double y0 = tickY(svg, "0");
         double y10 = tickY(svg, "10");
         return y0 + (y10 - y0) * hz / 10;
     }
 
-    private static double tickY(Svg svg, String label) {
+    static double tickY(Svg svg, String label) {
         // a y tick's label sits 4 px below its grid line (baseline centring)
         return svg.texts().stream().filter(t -> t.cls().equals("tick") && t.anchor().equals("end")
                 && t.text().equals(label)).map(t -> Double.parseDouble(t.y()) - 4).findFirst().orElseThrow();
