@@ -211,38 +211,75 @@ final class MatrixModel {
      * only when read.
      */
     private Response modalResponse(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
-        return new Response(new ModalParts(er, ei, w, shift, yr, yi));
+        double[] rigidRe = null;
+        double[] rigidIm = null;
+        if (shift != null) {
+            rigidRe = new double[n];
+            rigidIm = new double[n];
+            for (int j = 0; j < n; j++) {
+                rigidRe[j] = shift[j] * yr;
+                rigidIm[j] = shift[j] * yi;
+            }
+        }
+        return new Response(new ModalParts(er, ei, w, rigidRe, rigidIm));
     }
 
-    /** The modal amplitudes of one response, from which its quantities are formed on demand. */
+    /**
+     * The modal amplitudes of one response, from which its quantities are formed on demand, and
+     * the rigid motion the ground carries the model along by (null when the ground stands still).
+     */
     private final class ModalParts implements Response.Parts {
 
         private final double[] er;
         private final double[] ei;
         private final double w;
-        private final double[] shift;
-        private final double yr;
-        private final double yi;
+        private final double[] rigidRe;
+        private final double[] rigidIm;
         private double[] gr;
         private double[] gi;
 
-        ModalParts(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
+        ModalParts(double[] er, double[] ei, double w, double[] rigidRe, double[] rigidIm) {
             this.er = er;
             this.ei = ei;
             this.w = w;
-            this.shift = shift;
-            this.yr = yr;
-            this.yi = yi;
+            this.rigidRe = rigidRe;
+            this.rigidIm = rigidIm;
+        }
+
+        private MatrixModel owner() {
+            return MatrixModel.this;
+        }
+
+        /** Loads at one frequency on one model: their modal amplitudes (and rigid motions) add. */
+        @Override
+        public Response.Parts plus(Response.Parts other) {
+            if (!(other instanceof ModalParts o) || o.owner() != owner() || o.w != w) {
+                return null;
+            }
+            double[] sr = new double[n];
+            double[] si = new double[n];
+            for (int m = 0; m < n; m++) {
+                sr[m] = er[m] + o.er[m];
+                si[m] = ei[m] + o.ei[m];
+            }
+            if (rigidRe == null && o.rigidRe == null) {
+                return new ModalParts(sr, si, w, null, null);
+            }
+            double[] rr = new double[n];
+            double[] ri = new double[n];
+            for (int j = 0; j < n; j++) {
+                rr[j] = (rigidRe == null ? 0 : rigidRe[j]) + (o.rigidRe == null ? 0 : o.rigidRe[j]);
+                ri[j] = (rigidIm == null ? 0 : rigidIm[j]) + (o.rigidIm == null ? 0 : o.rigidIm[j]);
+            }
+            return new ModalParts(sr, si, w, rr, ri);
         }
 
         @Override
         public Phasors displacements() {
             Phasors q = new Phasors(n);
-            if (shift != null) {
-                for (int j = 0; j < n; j++) {
-                    q.re[j] = shift[j] * yr;
-                    q.im[j] = shift[j] * yi;
-                }
+            if (rigidRe != null) {
+                System.arraycopy(rigidRe, 0, q.re, 0, n);
+                System.arraycopy(rigidIm, 0, q.im, 0, n);
             }
             for (int m = 0; m < n; m++) {
                 double[] v = phi[m];

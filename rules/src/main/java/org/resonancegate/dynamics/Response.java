@@ -1,5 +1,7 @@
 package org.resonancegate.dynamics;
 
+import java.util.Optional;
+
 /**
  * The steady-state complex response of a linear system to one {@link Load} at one angular
  * frequency (each quantity is Re(A·e^{iωt})).
@@ -18,6 +20,14 @@ public final class Response {
         Phasors elementForces();
 
         Phasors groundForces();
+
+        /**
+         * The parts of this response plus {@code other}'s, combined before any quantity is
+         * formed; {@code null} when they cannot be.
+         */
+        default Parts plus(Parts other) {
+            return null;
+        }
     }
 
     private Parts parts;
@@ -41,6 +51,18 @@ public final class Response {
 
     Response(Parts parts) {
         this.parts = parts;
+    }
+
+    /**
+     * The response to this response's load and {@code other}'s together, when the model can add
+     * them in modal space: both from one modal model at one angular frequency, to the bit. Then
+     * the mount forces or point motions of several drives at one frequency are formed once
+     * instead of once per drive (the sum is exact; only the rounding of the last bit can differ
+     * from adding the formed quantities). Empty otherwise.
+     */
+    public Optional<Response> plusModal(Response other) {
+        Parts combined = parts != null && other.parts != null ? parts.plus(other.parts) : null;
+        return combined == null ? Optional.empty() : Optional.of(new Response(combined));
     }
 
     /** Absolute amplitudes of the degrees of freedom. */
