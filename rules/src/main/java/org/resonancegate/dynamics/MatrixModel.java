@@ -3,6 +3,7 @@ package org.resonancegate.dynamics;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
 
@@ -46,6 +47,10 @@ final class MatrixModel {
     record BaseShape(double[] shift, double[] rowGround, double[] part) {
     }
 
+    /** The undamped modes of a model and the tolerance scale it was built at. */
+    record Modes(double[] omegaSq, double[][] phi, ModelScale scale) {
+    }
+
     final int n;
     final double[][] mass;
     final double[][] stiffness;
@@ -62,14 +67,19 @@ final class MatrixModel {
     /** Per ground-force component and mode, Σ over the grounded rows of k_r·(g_r·φ_m). */
     private final double[][] groundModal;
     final List<Mode> modes;
+    private final ModelScale scale;
 
     /**
      * @param modalRatio the model-level ratio for every mode, or empty for element damping
      * @param dofNames   motion names for mode shares ("x" …, or mass names)
      * @param dofReading the same for a reader
+     * @param scale      the tolerance scale the mass and the rows were built at
+     * @param sameModel  the modes of this very model at another scale, when known: then no
+     *                   eigenproblem is solved (see {@link #scaledModes})
      */
     MatrixModel(double[][] mass, List<Row> rowList, int groundComponents, OptionalDouble modalRatio,
-                String[] dofNames, String[] dofReading) {
+                String[] dofNames, String[] dofReading, ModelScale scale, Optional<Modes> sameModel) {
+        this.scale = scale;
         this.n = mass.length;
         this.mass = mass;
         this.rows = rowList.toArray(new Row[0]);
@@ -83,9 +93,15 @@ final class MatrixModel {
             addOuter(viscous, r.gather(), r.c());
             addOuter(hysteretic, r.gather(), r.k() * r.eta());
         }
-        GeneralizedEigen.Solution s = GeneralizedEigen.solve(mass, stiffness);
-        omegaSq = s.values();
-        phi = s.vectors();
+        Optional<Modes> known = sameModel.flatMap(this::scaledModes);
+        if (known.isPresent()) {
+            omegaSq = known.get().omegaSq();
+            phi = known.get().phi();
+        } else {
+            GeneralizedEigen.Solution s = GeneralizedEigen.solve(mass, stiffness);
+            omegaSq = s.values();
+            phi = s.vectors();
+        }
         omegaN = new double[n];
         zeta = new double[n];
         List<Mode> list = new ArrayList<>();
@@ -120,6 +136,40 @@ final class MatrixModel {
                 }
             }
         }
+    }
+
+    /** This model's undamped modes, for the same model at another tolerance scale. */
+    Modes modesForScaling() {
+        return new Modes(omegaSq, phi, scale);
+    }
+
+    /**
+     * The modes of this model from those of the same model at another scale, exactly: every
+     * stiffness × κ and every mass × μ (relative to that scale) turn K·φ = λ·M·φ into
+     * κK·φ = (κ/μ)λ·μM·φ, so the shapes stay, λ scales by κ/μ, and mass normalisation
+     * (φᵀ·μM·φ = 1) divides each shape by √μ; the sign convention (largest component positive)
+     * is kept. Damping does not enter the undamped modes; the modal ratios are worked out below
+     * from this model's own damping, as for a fresh solution. Empty when a factor is not a
+     * positive finite number (then the eigenproblem is solved).
+     */
+    private Optional<Modes> scaledModes(Modes other) {
+        double kappa = scale.stiffness() / other.scale().stiffness();
+        double mu = scale.mass() / other.scale().mass();
+        if (!(kappa > 0 && mu > 0 && Double.isFinite(kappa) && Double.isFinite(mu))
+                || other.omegaSq().length != n) {
+            return Optional.empty();
+        }
+        double ratio = kappa / mu;
+        double shape = 1 / Math.sqrt(mu);
+        double[] values = new double[n];
+        double[][] vectors = new double[n][n];
+        for (int r = 0; r < n; r++) {
+            values[r] = other.omegaSq()[r] * ratio;
+            for (int j = 0; j < n; j++) {
+                vectors[r][j] = other.phi()[r][j] * shape;
+            }
+        }
+        return Optional.of(new Modes(values, vectors, scale));
     }
 
     Pattern pattern(double[] re, double[] im) {
