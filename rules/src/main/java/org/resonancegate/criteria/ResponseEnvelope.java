@@ -231,23 +231,13 @@ final class ResponseEnvelope {
                 im[j] = f.im(rows[j]);
             }
         } else {
-            Phasors q = response.displacements();
-            boolean velocity = channels.quantity() == Quantity.VELOCITY;
-            for (int j = 0; j < size; j++) {
-                double[] g = channels.gathers()[j];
-                double r = 0;
-                double i = 0;
-                for (int k = 0; k < g.length; k++) {
-                    r += g[k] * q.re(k);
-                    i += g[k] * q.im(k);
-                }
-                if (velocity) {
+            response.along(channels.gathers(), re, im);
+            if (channels.quantity() == Quantity.VELOCITY) {
+                for (int j = 0; j < size; j++) {
                     // v = iω·x
-                    re[j] = -w * i;
+                    double r = re[j];
+                    re[j] = -w * im[j];
                     im[j] = w * r;
-                } else {
-                    re[j] = r;
-                    im[j] = i;
                 }
             }
         }

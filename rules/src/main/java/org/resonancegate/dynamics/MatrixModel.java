@@ -67,6 +67,8 @@ final class MatrixModel {
     /** Per ground-force component and mode, Σ over the grounded rows of k_r·(g_r·φ_m). */
     private final double[][] groundModal;
     final List<Mode> modes;
+    /** Per set of probe rows a criterion reads, each row's modal coefficients g·φ_m. */
+    private final ShapeCache<double[][], double[][]> probeModes = new ShapeCache<>();
     private final ModelScale scale;
 
     /**
@@ -170,6 +172,17 @@ final class MatrixModel {
             }
         }
         return Optional.of(new Modes(values, vectors, scale));
+    }
+
+    /** Each row's modal coefficients g·φ_m. */
+    private double[][] modalCoefficients(double[][] gathers) {
+        double[][] out = new double[gathers.length][n];
+        for (int j = 0; j < gathers.length; j++) {
+            for (int m = 0; m < n; m++) {
+                out[j][m] = dot(gathers[j], phi[m]);
+            }
+        }
+        return out;
     }
 
     Pattern pattern(double[] re, double[] im) {
@@ -298,6 +311,31 @@ final class MatrixModel {
 
         private MatrixModel owner() {
             return MatrixModel.this;
+        }
+
+        /** g·q = g·(rigid motion) + Σ (g·φ_m)·η_m, the coefficients worked out once per set of rows. */
+        @Override
+        public boolean along(double[][] gathers, double[] re, double[] im) {
+            double[][] coefficients = probeModes.get(gathers, MatrixModel.this::modalCoefficients);
+            for (int j = 0; j < gathers.length; j++) {
+                double r = 0;
+                double i = 0;
+                if (rigidRe != null) {
+                    double[] g = gathers[j];
+                    for (int k = 0; k < n; k++) {
+                        r += g[k] * rigidRe[k];
+                        i += g[k] * rigidIm[k];
+                    }
+                }
+                double[] c = coefficients[j];
+                for (int m = 0; m < n; m++) {
+                    r += c[m] * er[m];
+                    i += c[m] * ei[m];
+                }
+                re[j] = r;
+                im[j] = i;
+            }
+            return true;
         }
 
         /** Loads at one frequency on one model: their modal amplitudes (and rigid motions) add. */

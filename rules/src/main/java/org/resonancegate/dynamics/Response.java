@@ -22,6 +22,14 @@ public final class Response {
         Phasors groundForces();
 
         /**
+         * The motion along each of {@code gathers} into {@code re}, {@code im}, when the parts can
+         * give it without forming every degree of freedom; {@code false} when they cannot.
+         */
+        default boolean along(double[][] gathers, double[] re, double[] im) {
+            return false;
+        }
+
+        /**
          * The parts of this response plus {@code other}'s, combined before any quantity is
          * formed; {@code null} when they cannot be.
          */
@@ -63,6 +71,31 @@ public final class Response {
     public Optional<Response> plusModal(Response other) {
         Parts combined = parts != null && other.parts != null ? parts.plus(other.parts) : null;
         return combined == null ? Optional.empty() : Optional.of(new Response(combined));
+    }
+
+    /**
+     * The complex motion g·q along each row g of {@code gathers} (rows over the degrees of
+     * freedom, as a {@link Probe} has), into {@code re} and {@code im}. A modal model keeps each
+     * row's modal coefficients g·φ_r, so a motion is a sum over the modes and the degrees of
+     * freedom are not formed (the same sum in another order: only the last bit can differ);
+     * any other response reads its displacements.
+     */
+    public void along(double[][] gathers, double[] re, double[] im) {
+        if (displacements == null && parts != null && parts.along(gathers, re, im)) {
+            return;
+        }
+        Phasors q = displacements();
+        for (int j = 0; j < gathers.length; j++) {
+            double[] g = gathers[j];
+            double r = 0;
+            double i = 0;
+            for (int k = 0; k < g.length; k++) {
+                r += g[k] * q.re[k];
+                i += g[k] * q.im[k];
+            }
+            re[j] = r;
+            im[j] = i;
+        }
     }
 
     /** Absolute amplitudes of the degrees of freedom. */
