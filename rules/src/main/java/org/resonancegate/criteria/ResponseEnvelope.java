@@ -136,8 +136,8 @@ final class ResponseEnvelope {
 
     private static SpeedSweep.Peak sweep(RuleContext ctx, Channels channels, Measure measure, String what) {
         Scratch scratch = new Scratch(ctx.excitations().size(), channels.size());
-        return SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s, scratch), ctx.minSpeed(), ctx.maxSpeed(),
-                ctx.specialSpeeds(), what);
+        return SpeedSweep.maximiseOver(s -> valueAt(ctx, channels, measure, s, scratch), ctx.minSpeed(),
+                ctx.maxSpeed(), ctx.sweepSpeeds(), what);
     }
 
     /**
