@@ -7,7 +7,6 @@ import java.util.Optional;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.ElementRow;
-import org.resonancegate.dynamics.Phasors;
 import org.resonancegate.dynamics.Probe;
 import org.resonancegate.dynamics.Response;
 import org.resonancegate.spec.Axis;
@@ -224,12 +223,7 @@ final class ResponseEnvelope {
     private static void read(Channels channels, Response response, double w, double[] re, double[] im) {
         int size = channels.size();
         if (channels.quantity() == Quantity.ELEMENT_FORCE) {
-            Phasors f = response.elementForces();
-            int[] rows = channels.rows();
-            for (int j = 0; j < size; j++) {
-                re[j] = f.re(rows[j]);
-                im[j] = f.im(rows[j]);
-            }
+            response.elementForces(channels.rows(), re, im);
         } else {
             response.along(channels.gathers(), re, im);
             if (channels.quantity() == Quantity.VELOCITY) {

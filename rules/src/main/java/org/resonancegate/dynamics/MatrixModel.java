@@ -384,18 +384,32 @@ final class MatrixModel {
             modalForces();
             Phasors f = new Phasors(rows.length);
             for (int r = 0; r < rows.length; r++) {
-                double[] c = rowModal[r];
-                double sr = 0;
-                double si = 0;
-                for (int m = 0; m < n; m++) {
-                    sr += c[m] * gr[m];
-                    si += c[m] * gi[m];
-                }
-                double k = rows[r].k();
-                f.re[r] = k * sr;
-                f.im[r] = k * si;
+                rowForce(r, f.re, f.im, r);
             }
             return f;
+        }
+
+        @Override
+        public boolean forces(int[] wanted, double[] re, double[] im) {
+            modalForces();
+            for (int j = 0; j < wanted.length; j++) {
+                rowForce(wanted[j], re, im, j);
+            }
+            return true;
+        }
+
+        /** Row r's force k_r·Σ (g_r·φ_m)·η_m·(1 + i·2ζ_m·ω/ω_m), into slot {@code at} (after {@link #modalForces}). */
+        private void rowForce(int r, double[] re, double[] im, int at) {
+            double[] c = rowModal[r];
+            double sr = 0;
+            double si = 0;
+            for (int m = 0; m < n; m++) {
+                sr += c[m] * gr[m];
+                si += c[m] * gi[m];
+            }
+            double k = rows[r].k();
+            re[at] = k * sr;
+            im[at] = k * si;
         }
 
         /**

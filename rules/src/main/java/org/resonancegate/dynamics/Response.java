@@ -30,6 +30,14 @@ public final class Response {
         }
 
         /**
+         * The dynamic force of each of element rows {@code rows} into {@code re}, {@code im},
+         * when the parts can give them without forming every row; {@code false} when they cannot.
+         */
+        default boolean forces(int[] rows, double[] re, double[] im) {
+            return false;
+        }
+
+        /**
          * The parts of this response plus {@code other}'s, combined before any quantity is
          * formed; {@code null} when they cannot be.
          */
@@ -95,6 +103,22 @@ public final class Response {
             }
             re[j] = r;
             im[j] = i;
+        }
+    }
+
+    /**
+     * The dynamic force in each of element rows {@code rows} (indices into
+     * {@link #elementForces()}), into {@code re} and {@code im}: the same numbers, but a modal
+     * model forms only those rows and keeps no vector of them (a sweep reads each response once).
+     */
+    public void elementForces(int[] rows, double[] re, double[] im) {
+        if (elementForces == null && parts != null && parts.forces(rows, re, im)) {
+            return;
+        }
+        Phasors f = elementForces();
+        for (int j = 0; j < rows.length; j++) {
+            re[j] = f.re[rows[j]];
+            im[j] = f.im[rows[j]];
         }
     }
 
