@@ -400,16 +400,19 @@ final class MatrixModel {
 
         /** Row r's force k_r·Σ (g_r·φ_m)·η_m·(1 + i·2ζ_m·ω/ω_m), into slot {@code at} (after {@link #modalForces}). */
         private void rowForce(int r, double[] re, double[] im, int at) {
-            double[] c = rowModal[r];
+            modalSum(rowModal[r], rows[r].k(), re, im, at);
+        }
+
+        /** factor·Σ a_m·(elastic-plus-damping amplitude of mode m), into slot {@code at}. */
+        private void modalSum(double[] a, double factor, double[] re, double[] im, int at) {
             double sr = 0;
             double si = 0;
             for (int m = 0; m < n; m++) {
-                sr += c[m] * gr[m];
-                si += c[m] * gi[m];
+                sr += a[m] * gr[m];
+                si += a[m] * gi[m];
             }
-            double k = rows[r].k();
-            re[at] = k * sr;
-            im[at] = k * si;
+            re[at] = factor * sr;
+            im[at] = factor * si;
         }
 
         /**
@@ -421,15 +424,7 @@ final class MatrixModel {
             modalForces();
             Phasors g = new Phasors(groundComponents);
             for (int c = 0; c < groundComponents; c++) {
-                double[] a = groundModal[c];
-                double sr = 0;
-                double si = 0;
-                for (int m = 0; m < n; m++) {
-                    sr += a[m] * gr[m];
-                    si += a[m] * gi[m];
-                }
-                g.re[c] = sr;
-                g.im[c] = si;
+                modalSum(groundModal[c], 1, g.re, g.im, c); // × 1 is exact: the same sums as before
             }
             return g;
         }
