@@ -88,8 +88,8 @@ final class IsolationRule {
             boolean follows = e.frequency() instanceof ExcitationFrequency.Order;
             SpeedSweep.Peak p = ctx.fixedSpeed() || !follows
                     ? new SpeedSweep.Peak(ctx.minSpeed(), transmissibilityAt(e, ctx, ctx.minSpeed(), c.at()).t())
-                    : SpeedSweep.maximise(s -> transmissibilityAt(e, ctx, s, c.at()).t(), ctx.minSpeed(),
-                    ctx.maxSpeed(), ctx.specialSpeeds(), "transmissibility of '" + e.name() + "'");
+                    : SpeedSweep.maximiseOver(s -> transmissibilityAt(e, ctx, s, c.at()).t(), ctx.minSpeed(),
+                    ctx.maxSpeed(), ctx.sweepSpeeds(), "transmissibility of '" + e.name() + "'");
             if (peak == null || (p.value() > peak.value() && !Ties.same(p.value(), peak.value()))) {
                 peak = p;
                 worst = e;

@@ -1,13 +1,14 @@
 package org.resonancegate.criteria;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import org.apache.commons.math3.complex.Complex;
 import org.resonancegate.dynamics.Drive;
 import org.resonancegate.dynamics.ElementRow;
-import org.resonancegate.dynamics.Phasors;
 import org.resonancegate.dynamics.Probe;
+import org.resonancegate.dynamics.Response;
 import org.resonancegate.spec.Axis;
 import org.resonancegate.spec.ResponsePoint;
 
@@ -118,12 +119,14 @@ final class ResponseEnvelope {
     /** Working arrays of one sweep, reused at every speed (a sweep runs on one thread). */
     private static final class Scratch {
         final int[] group;
+        final boolean[] taken;
         final double[] groupOmega;
         final double[][] re;
         final double[][] im;
 
         Scratch(int drives, int size) {
             group = new int[drives];
+            taken = new boolean[drives];
             groupOmega = new double[drives];
             re = new double[drives][size];
             im = new double[drives][size];
@@ -132,15 +135,17 @@ final class ResponseEnvelope {
 
     private static SpeedSweep.Peak sweep(RuleContext ctx, Channels channels, Measure measure, String what) {
         Scratch scratch = new Scratch(ctx.excitations().size(), channels.size());
-        return SpeedSweep.maximise(s -> valueAt(ctx, channels, measure, s, scratch), ctx.minSpeed(), ctx.maxSpeed(),
-                ctx.specialSpeeds(), what);
+        return SpeedSweep.maximiseOver(s -> valueAt(ctx, channels, measure, s, scratch), ctx.minSpeed(),
+                ctx.maxSpeed(), ctx.sweepSpeeds(), what);
     }
 
     /**
-     * The largest combined component at one speed, without building per-component lists: the
-     * drives are grouped by frequency once, each drive's components are read into primitive
-     * arrays in one pass (the kind of quantity is decided once per drive, not per component),
-     * then every component sums its phasors per group. This is the sweep's inner loop.
+     * The largest combined component at one speed, without building per-component lists. Drives
+     * at the very same frequency on a modal model are added as responses first (their modal
+     * amplitudes add, so each component is formed once per frequency, not once per drive); the
+     * bundles are grouped by frequency (within the tie rule), each bundle's components are read
+     * into primitive arrays in one pass, then every component sums its phasors per group. This is
+     * the sweep's inner loop.
      */
     private static double valueAt(RuleContext ctx, Channels channels, Measure measure, double speed, Scratch scratch) {
         List<RuleContext.Driven> driven = ctx.respondAt(speed);
@@ -148,12 +153,30 @@ final class ResponseEnvelope {
         int size = channels.size();
         int[] group = scratch.group;
         double[] groupOmega = scratch.groupOmega;
-        int groups = 0;
         double[][] re = scratch.re;
         double[][] im = scratch.im;
+        int groups = 0;
+        int bundles = 0;
+        boolean[] taken = scratch.taken;
+        Arrays.fill(taken, 0, drives, false);
         for (int d = 0; d < drives; d++) {
-            RuleContext.Driven dr = driven.get(d);
-            double w = dr.drive().omega();
+            if (taken[d]) {
+                continue;
+            }
+            RuleContext.Driven first = driven.get(d);
+            double w = first.drive().omega();
+            Response sum = first.response();
+            int members = 1;
+            for (int e = d + 1; e < drives; e++) {
+                if (!taken[e] && driven.get(e).drive().omega() == w) {
+                    Optional<Response> both = sum.plusModal(driven.get(e).response());
+                    if (both.isPresent()) {
+                        taken[e] = true;
+                        sum = both.get();
+                        members++;
+                    }
+                }
+            }
             int found = -1;
             for (int g = 0; g < groups; g++) {
                 if (Ties.same(groupOmega[g], w)) {
@@ -165,21 +188,25 @@ final class ResponseEnvelope {
                 found = groups;
                 groupOmega[groups++] = w;
             }
-            group[d] = found;
-            read(channels, dr, re[d], im[d], speed);
+            group[bundles] = found;
+            read(channels, sum, w, re[bundles], im[bundles]);
+            if (!finite(re[bundles], im[bundles], size)) {
+                refuse(channels, driven, d, members > 1 ? w : Double.NaN, speed);
+            }
+            bundles++;
         }
         double worst = 0;
         for (int j = 0; j < size; j++) {
-            // Each group's phasor sum is formed in registers, drives in listing order (the same
-            // sums, bit for bit, as accumulating into arrays), with no arrays to clear per component.
+            // Each group's phasor sum is formed in registers, bundles in listing order of their
+            // first drive, with no arrays to clear per component.
             double v = 0;
             for (int g = 0; g < groups; g++) {
                 double sr = 0;
                 double si = 0;
-                for (int d = 0; d < drives; d++) {
-                    if (group[d] == g) {
-                        sr += re[d][j];
-                        si += im[d][j];
+                for (int b = 0; b < bundles; b++) {
+                    if (group[b] == g) {
+                        sr += re[b][j];
+                        si += im[b][j];
                     }
                 }
                 v += measure == Measure.RMS ? (sr * sr + si * si) / 2 : Math.sqrt(sr * sr + si * si);
@@ -192,45 +219,57 @@ final class ResponseEnvelope {
         return worst;
     }
 
-    /** One drive's complex amplitude of every component, into {@code re}, {@code im}; non-finite is refused. */
-    private static void read(Channels channels, RuleContext.Driven dr, double[] re, double[] im, double speed) {
+    /** One response's complex amplitude of every component (frequency {@code w}), into {@code re}, {@code im}. */
+    private static void read(Channels channels, Response response, double w, double[] re, double[] im) {
         int size = channels.size();
         if (channels.quantity() == Quantity.ELEMENT_FORCE) {
-            Phasors f = dr.response().elementForces();
-            int[] rows = channels.rows();
-            for (int j = 0; j < size; j++) {
-                re[j] = f.re(rows[j]);
-                im[j] = f.im(rows[j]);
-            }
+            response.elementForces(channels.rows(), re, im);
         } else {
-            Phasors q = dr.response().displacements();
-            double w = dr.drive().omega();
-            boolean velocity = channels.quantity() == Quantity.VELOCITY;
-            for (int j = 0; j < size; j++) {
-                double[] g = channels.gathers()[j];
-                double r = 0;
-                double i = 0;
-                for (int k = 0; k < g.length; k++) {
-                    r += g[k] * q.re(k);
-                    i += g[k] * q.im(k);
-                }
-                if (velocity) {
+            response.along(channels.gathers(), re, im);
+            if (channels.quantity() == Quantity.VELOCITY) {
+                for (int j = 0; j < size; j++) {
                     // v = iω·x
-                    re[j] = -w * i;
+                    double r = re[j];
+                    re[j] = -w * im[j];
                     im[j] = w * r;
-                } else {
-                    re[j] = r;
-                    im[j] = i;
                 }
             }
         }
+    }
+
+    private static boolean finite(double[] re, double[] im, int size) {
         for (int j = 0; j < size; j++) {
             if (!Double.isFinite(re[j]) || !Double.isFinite(im[j])) {
-                throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
-                        + "' at " + Display.rpm(speed) + " came out as " + re[j] + " + " + im[j] + "i"
-                        + "; check that mass, stiffness and damping are positive and that damping is not zero");
+                return false;
             }
         }
+        return true;
+    }
+
+    /**
+     * Non-finite response: names the drive that gave it, reading the drives of a bundle one by
+     * one ({@code w} their shared frequency; NaN when drive {@code d} stands alone).
+     */
+    private static void refuse(Channels channels, List<RuleContext.Driven> driven, int d, double w, double speed) {
+        int size = channels.size();
+        double[] re = new double[size];
+        double[] im = new double[size];
+        for (int e = d; e < driven.size(); e++) {
+            RuleContext.Driven dr = driven.get(e);
+            if (e != d && dr.drive().omega() != w) {
+                continue;
+            }
+            read(channels, dr.response(), dr.drive().omega(), re, im);
+            for (int j = 0; j < size; j++) {
+                if (!Double.isFinite(re[j]) || !Double.isFinite(im[j])) {
+                    throw new CriterionProblem("numerical trouble: the response to '" + dr.drive().source().name()
+                            + "' at " + Display.rpm(speed) + " came out as " + re[j] + " + " + im[j] + "i"
+                            + "; check that mass, stiffness and damping are positive and that damping is not zero");
+                }
+            }
+        }
+        throw new CriterionProblem("numerical trouble: the combined response at " + Display.rpm(speed)
+                + " is not finite; check that mass, stiffness and damping are positive and that damping is not zero");
     }
 
     private static double combine(List<Combination.Contribution> component, Measure measure) {

@@ -46,6 +46,7 @@ public final class RuleContext {
     private final List<Optional<Drives.Prepared>> prepared;
     private final SpeedMemo<AtSpeed> memo = new SpeedMemo<>();
     private double[] specialSpeeds;
+    private double[] sweepSpeeds;
     private final Map<List<Object>, List<Probe>> probesAlong = new HashMap<>();
 
     public RuleContext(LinearSystem system, Operation operation, List<Excitation> excitations) {
@@ -216,6 +217,17 @@ public final class RuleContext {
         }
         specialSpeeds = java.util.Arrays.copyOf(out, count);
         return specialSpeeds;
+    }
+
+    /**
+     * The speeds every sweep of this case samples first ({@link SpeedSweep#samples} over the
+     * speed range with {@link #specialSpeeds}), sorted once for all criteria and excitations.
+     */
+    double[] sweepSpeeds() {
+        if (sweepSpeeds == null) {
+            sweepSpeeds = SpeedSweep.samples(minSpeed(), maxSpeed(), specialSpeeds());
+        }
+        return sweepSpeeds;
     }
 
     /** The mode nearest (in frequency ratio) to angular frequency {@code omega}, if any. */

@@ -48,6 +48,15 @@ public final class SpeedSweep {
      * Every sample must be finite, otherwise a {@link CriterionProblem} names the speed.
      */
     public static Peak maximise(DoubleUnaryOperator f, double lo, double hi, double[] specialSpeeds, String what) {
+        return maximiseOver(f, lo, hi, hi > lo ? samples(lo, hi, specialSpeeds) : new double[0], what);
+    }
+
+    /**
+     * As {@link #maximise(DoubleUnaryOperator, double, double, double[], String)}, over samples
+     * already made by {@link #samples} for this range: a model case sweeps the same samples
+     * for every criterion and excitation, so it sorts them once.
+     */
+    static Peak maximiseOver(DoubleUnaryOperator f, double lo, double hi, double[] x, String what) {
         // The message is built only when needed: formatting a speed costs more than a response.
         DoubleUnaryOperator checked = s -> {
             double v = f.applyAsDouble(s);
@@ -56,7 +65,6 @@ public final class SpeedSweep {
         if (!(hi > lo)) {
             return new Peak(lo, checked.applyAsDouble(lo));
         }
-        double[] x = samples(lo, hi, specialSpeeds);
         double[] y = new double[x.length];
         for (int i = 0; i < x.length; i++) {
             y[i] = checked.applyAsDouble(x[i]);

@@ -29,7 +29,8 @@ public final class LumpedLine implements LinearSystem {
     private final List<Probe> allMasses = new ArrayList<>();
     private final double[] masses;
 
-    LumpedLine(Model.Lumped model, ModelScale scale, OptionalDouble modalRatio) {
+    /** @param sameModel this very model built at another tolerance scale, whose modes are reused */
+    LumpedLine(Model.Lumped model, ModelScale scale, OptionalDouble modalRatio, Optional<LumpedLine> sameModel) {
         this.model = model;
         int n = model.masses().size();
         if (n == 0) {
@@ -80,7 +81,8 @@ public final class LumpedLine implements LinearSystem {
             elementRows.add(new ElementRow(e, Optional.empty(), label));
             elementLabels.add(label);
         }
-        core = new MatrixModel(m, rows, 1, modalRatio, names, names);
+        core = new MatrixModel(m, rows, 1, modalRatio, names, names, scale,
+                sameModel.filter(l -> l.model == model).map(l -> l.core.modesForScaling()));
         double[] ones = new double[n];
         java.util.Arrays.fill(ones, 1);
         double[] rowGround = new double[rows.size()];

@@ -3,6 +3,7 @@ package org.resonancegate.dynamics;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
 
@@ -46,6 +47,10 @@ final class MatrixModel {
     record BaseShape(double[] shift, double[] rowGround, double[] part) {
     }
 
+    /** The undamped modes of a model and the tolerance scale it was built at. */
+    record Modes(double[] omegaSq, double[][] phi, ModelScale scale) {
+    }
+
     final int n;
     final double[][] mass;
     final double[][] stiffness;
@@ -62,14 +67,21 @@ final class MatrixModel {
     /** Per ground-force component and mode, Σ over the grounded rows of k_r·(g_r·φ_m). */
     private final double[][] groundModal;
     final List<Mode> modes;
+    /** Per set of probe rows a criterion reads, each row's modal coefficients g·φ_m. */
+    private final ShapeCache<double[][], double[][]> probeModes = new ShapeCache<>();
+    private final ModelScale scale;
 
     /**
      * @param modalRatio the model-level ratio for every mode, or empty for element damping
      * @param dofNames   motion names for mode shares ("x" …, or mass names)
      * @param dofReading the same for a reader
+     * @param scale      the tolerance scale the mass and the rows were built at
+     * @param sameModel  the modes of this very model at another scale, when known: then no
+     *                   eigenproblem is solved (see {@link #scaledModes})
      */
     MatrixModel(double[][] mass, List<Row> rowList, int groundComponents, OptionalDouble modalRatio,
-                String[] dofNames, String[] dofReading) {
+                String[] dofNames, String[] dofReading, ModelScale scale, Optional<Modes> sameModel) {
+        this.scale = scale;
         this.n = mass.length;
         this.mass = mass;
         this.rows = rowList.toArray(new Row[0]);
@@ -83,9 +95,15 @@ final class MatrixModel {
             addOuter(viscous, r.gather(), r.c());
             addOuter(hysteretic, r.gather(), r.k() * r.eta());
         }
-        GeneralizedEigen.Solution s = GeneralizedEigen.solve(mass, stiffness);
-        omegaSq = s.values();
-        phi = s.vectors();
+        Optional<Modes> known = sameModel.flatMap(this::scaledModes);
+        if (known.isPresent()) {
+            omegaSq = known.get().omegaSq();
+            phi = known.get().phi();
+        } else {
+            GeneralizedEigen.Solution s = GeneralizedEigen.solve(mass, stiffness);
+            omegaSq = s.values();
+            phi = s.vectors();
+        }
         omegaN = new double[n];
         zeta = new double[n];
         List<Mode> list = new ArrayList<>();
@@ -120,6 +138,51 @@ final class MatrixModel {
                 }
             }
         }
+    }
+
+    /** This model's undamped modes, for the same model at another tolerance scale. */
+    Modes modesForScaling() {
+        return new Modes(omegaSq, phi, scale);
+    }
+
+    /**
+     * The modes of this model from those of the same model at another scale, exactly: every
+     * stiffness × κ and every mass × μ (relative to that scale) turn K·φ = λ·M·φ into
+     * κK·φ = (κ/μ)λ·μM·φ, so the shapes stay, λ scales by κ/μ, and mass normalisation
+     * (φᵀ·μM·φ = 1) divides each shape by √μ; the sign convention (largest component positive)
+     * is kept. Damping does not enter the undamped modes; the modal ratios are worked out below
+     * from this model's own damping, as for a fresh solution. Empty when a factor is not a
+     * positive finite number (then the eigenproblem is solved).
+     */
+    private Optional<Modes> scaledModes(Modes other) {
+        double kappa = scale.stiffness() / other.scale().stiffness();
+        double mu = scale.mass() / other.scale().mass();
+        if (!(kappa > 0 && mu > 0 && Double.isFinite(kappa) && Double.isFinite(mu))
+                || other.omegaSq().length != n) {
+            return Optional.empty();
+        }
+        double ratio = kappa / mu;
+        double shape = 1 / Math.sqrt(mu);
+        double[] values = new double[n];
+        double[][] vectors = new double[n][n];
+        for (int r = 0; r < n; r++) {
+            values[r] = other.omegaSq()[r] * ratio;
+            for (int j = 0; j < n; j++) {
+                vectors[r][j] = other.phi()[r][j] * shape;
+            }
+        }
+        return Optional.of(new Modes(values, vectors, scale));
+    }
+
+    /** Each row's modal coefficients g·φ_m. */
+    private double[][] modalCoefficients(double[][] gathers) {
+        double[][] out = new double[gathers.length][n];
+        for (int j = 0; j < gathers.length; j++) {
+            for (int m = 0; m < n; m++) {
+                out[j][m] = dot(gathers[j], phi[m]);
+            }
+        }
+        return out;
     }
 
     Pattern pattern(double[] re, double[] im) {
@@ -211,38 +274,100 @@ final class MatrixModel {
      * only when read.
      */
     private Response modalResponse(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
-        return new Response(new ModalParts(er, ei, w, shift, yr, yi));
+        double[] rigidRe = null;
+        double[] rigidIm = null;
+        if (shift != null) {
+            rigidRe = new double[n];
+            rigidIm = new double[n];
+            for (int j = 0; j < n; j++) {
+                rigidRe[j] = shift[j] * yr;
+                rigidIm[j] = shift[j] * yi;
+            }
+        }
+        return new Response(new ModalParts(er, ei, w, rigidRe, rigidIm));
     }
 
-    /** The modal amplitudes of one response, from which its quantities are formed on demand. */
+    /**
+     * The modal amplitudes of one response, from which its quantities are formed on demand, and
+     * the rigid motion the ground carries the model along by (null when the ground stands still).
+     */
     private final class ModalParts implements Response.Parts {
 
         private final double[] er;
         private final double[] ei;
         private final double w;
-        private final double[] shift;
-        private final double yr;
-        private final double yi;
+        private final double[] rigidRe;
+        private final double[] rigidIm;
         private double[] gr;
         private double[] gi;
 
-        ModalParts(double[] er, double[] ei, double w, double[] shift, double yr, double yi) {
+        ModalParts(double[] er, double[] ei, double w, double[] rigidRe, double[] rigidIm) {
             this.er = er;
             this.ei = ei;
             this.w = w;
-            this.shift = shift;
-            this.yr = yr;
-            this.yi = yi;
+            this.rigidRe = rigidRe;
+            this.rigidIm = rigidIm;
+        }
+
+        private MatrixModel owner() {
+            return MatrixModel.this;
+        }
+
+        /** g·q = g·(rigid motion) + Σ (g·φ_m)·η_m, the coefficients worked out once per set of rows. */
+        @Override
+        public boolean along(double[][] gathers, double[] re, double[] im) {
+            double[][] coefficients = probeModes.get(gathers, MatrixModel.this::modalCoefficients);
+            for (int j = 0; j < gathers.length; j++) {
+                double r = 0;
+                double i = 0;
+                if (rigidRe != null) {
+                    double[] g = gathers[j];
+                    for (int k = 0; k < n; k++) {
+                        r += g[k] * rigidRe[k];
+                        i += g[k] * rigidIm[k];
+                    }
+                }
+                double[] c = coefficients[j];
+                for (int m = 0; m < n; m++) {
+                    r += c[m] * er[m];
+                    i += c[m] * ei[m];
+                }
+                re[j] = r;
+                im[j] = i;
+            }
+            return true;
+        }
+
+        /** Loads at one frequency on one model: their modal amplitudes (and rigid motions) add. */
+        @Override
+        public Response.Parts plus(Response.Parts other) {
+            if (!(other instanceof ModalParts o) || o.owner() != owner() || o.w != w) {
+                return null;
+            }
+            double[] sr = new double[n];
+            double[] si = new double[n];
+            for (int m = 0; m < n; m++) {
+                sr[m] = er[m] + o.er[m];
+                si[m] = ei[m] + o.ei[m];
+            }
+            if (rigidRe == null && o.rigidRe == null) {
+                return new ModalParts(sr, si, w, null, null);
+            }
+            double[] rr = new double[n];
+            double[] ri = new double[n];
+            for (int j = 0; j < n; j++) {
+                rr[j] = (rigidRe == null ? 0 : rigidRe[j]) + (o.rigidRe == null ? 0 : o.rigidRe[j]);
+                ri[j] = (rigidIm == null ? 0 : rigidIm[j]) + (o.rigidIm == null ? 0 : o.rigidIm[j]);
+            }
+            return new ModalParts(sr, si, w, rr, ri);
         }
 
         @Override
         public Phasors displacements() {
             Phasors q = new Phasors(n);
-            if (shift != null) {
-                for (int j = 0; j < n; j++) {
-                    q.re[j] = shift[j] * yr;
-                    q.im[j] = shift[j] * yi;
-                }
+            if (rigidRe != null) {
+                System.arraycopy(rigidRe, 0, q.re, 0, n);
+                System.arraycopy(rigidIm, 0, q.im, 0, n);
             }
             for (int m = 0; m < n; m++) {
                 double[] v = phi[m];
@@ -259,18 +384,35 @@ final class MatrixModel {
             modalForces();
             Phasors f = new Phasors(rows.length);
             for (int r = 0; r < rows.length; r++) {
-                double[] c = rowModal[r];
-                double sr = 0;
-                double si = 0;
-                for (int m = 0; m < n; m++) {
-                    sr += c[m] * gr[m];
-                    si += c[m] * gi[m];
-                }
-                double k = rows[r].k();
-                f.re[r] = k * sr;
-                f.im[r] = k * si;
+                rowForce(r, f.re, f.im, r);
             }
             return f;
+        }
+
+        @Override
+        public boolean forces(int[] wanted, double[] re, double[] im) {
+            modalForces();
+            for (int j = 0; j < wanted.length; j++) {
+                rowForce(wanted[j], re, im, j);
+            }
+            return true;
+        }
+
+        /** Row r's force k_r·Σ (g_r·φ_m)·η_m·(1 + i·2ζ_m·ω/ω_m), into slot {@code at} (after {@link #modalForces}). */
+        private void rowForce(int r, double[] re, double[] im, int at) {
+            modalSum(rowModal[r], rows[r].k(), re, im, at);
+        }
+
+        /** factor·Σ a_m·(elastic-plus-damping amplitude of mode m), into slot {@code at}. */
+        private void modalSum(double[] a, double factor, double[] re, double[] im, int at) {
+            double sr = 0;
+            double si = 0;
+            for (int m = 0; m < n; m++) {
+                sr += a[m] * gr[m];
+                si += a[m] * gi[m];
+            }
+            re[at] = factor * sr;
+            im[at] = factor * si;
         }
 
         /**
@@ -282,15 +424,7 @@ final class MatrixModel {
             modalForces();
             Phasors g = new Phasors(groundComponents);
             for (int c = 0; c < groundComponents; c++) {
-                double[] a = groundModal[c];
-                double sr = 0;
-                double si = 0;
-                for (int m = 0; m < n; m++) {
-                    sr += a[m] * gr[m];
-                    si += a[m] * gi[m];
-                }
-                g.re[c] = sr;
-                g.im[c] = si;
+                modalSum(groundModal[c], 1, g.re, g.im, c); // × 1 is exact: the same sums as before
             }
             return g;
         }

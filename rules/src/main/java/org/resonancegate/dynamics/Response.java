@@ -1,5 +1,7 @@
 package org.resonancegate.dynamics;
 
+import java.util.Optional;
+
 /**
  * The steady-state complex response of a linear system to one {@link Load} at one angular
  * frequency (each quantity is Re(A·e^{iωt})).
@@ -18,6 +20,30 @@ public final class Response {
         Phasors elementForces();
 
         Phasors groundForces();
+
+        /**
+         * The motion along each of {@code gathers} into {@code re}, {@code im}, when the parts can
+         * give it without forming every degree of freedom; {@code false} when they cannot.
+         */
+        default boolean along(double[][] gathers, double[] re, double[] im) {
+            return false;
+        }
+
+        /**
+         * The dynamic force of each of element rows {@code rows} into {@code re}, {@code im},
+         * when the parts can give them without forming every row; {@code false} when they cannot.
+         */
+        default boolean forces(int[] rows, double[] re, double[] im) {
+            return false;
+        }
+
+        /**
+         * The parts of this response plus {@code other}'s, combined before any quantity is
+         * formed; {@code null} when they cannot be.
+         */
+        default Parts plus(Parts other) {
+            return null;
+        }
     }
 
     private Parts parts;
@@ -41,6 +67,59 @@ public final class Response {
 
     Response(Parts parts) {
         this.parts = parts;
+    }
+
+    /**
+     * The response to this response's load and {@code other}'s together, when the model can add
+     * them in modal space: both from one modal model at one angular frequency, to the bit. Then
+     * the mount forces or point motions of several drives at one frequency are formed once
+     * instead of once per drive (the sum is exact; only the rounding of the last bit can differ
+     * from adding the formed quantities). Empty otherwise.
+     */
+    public Optional<Response> plusModal(Response other) {
+        Parts combined = parts != null && other.parts != null ? parts.plus(other.parts) : null;
+        return combined == null ? Optional.empty() : Optional.of(new Response(combined));
+    }
+
+    /**
+     * The complex motion g·q along each row g of {@code gathers} (rows over the degrees of
+     * freedom, as a {@link Probe} has), into {@code re} and {@code im}. A modal model keeps each
+     * row's modal coefficients g·φ_r, so a motion is a sum over the modes and the degrees of
+     * freedom are not formed (the same sum in another order: only the last bit can differ);
+     * any other response reads its displacements.
+     */
+    public void along(double[][] gathers, double[] re, double[] im) {
+        if (displacements == null && parts != null && parts.along(gathers, re, im)) {
+            return;
+        }
+        Phasors q = displacements();
+        for (int j = 0; j < gathers.length; j++) {
+            double[] g = gathers[j];
+            double r = 0;
+            double i = 0;
+            for (int k = 0; k < g.length; k++) {
+                r += g[k] * q.re[k];
+                i += g[k] * q.im[k];
+            }
+            re[j] = r;
+            im[j] = i;
+        }
+    }
+
+    /**
+     * The dynamic force in each of element rows {@code rows} (indices into
+     * {@link #elementForces()}), into {@code re} and {@code im}: the same numbers, but a modal
+     * model forms only those rows and keeps no vector of them (a sweep reads each response once).
+     */
+    public void elementForces(int[] rows, double[] re, double[] im) {
+        if (elementForces == null && parts != null && parts.forces(rows, re, im)) {
+            return;
+        }
+        Phasors f = elementForces();
+        for (int j = 0; j < rows.length; j++) {
+            re[j] = f.re[rows[j]];
+            im[j] = f.im[rows[j]];
+        }
     }
 
     /** Absolute amplitudes of the degrees of freedom. */

@@ -33,7 +33,11 @@ public final class RigidBody6 implements LinearSystem {
     private final ShapeCache<Placement, MatrixModel.Pattern> patterns = new ShapeCache<>();
     private final ShapeCache<Direction, MatrixModel.BaseShape> bases = new ShapeCache<>();
 
-    RigidBody6(Model.RigidBody model, ModelScale scale, OptionalDouble modalRatio) {
+    private final Model.RigidBody model;
+
+    /** @param sameModel this very model built at another tolerance scale, whose modes are reused */
+    RigidBody6(Model.RigidBody model, ModelScale scale, OptionalDouble modalRatio, Optional<RigidBody6> sameModel) {
+        this.model = model;
         cg = model.centreOfGravity().si();
         mass = model.mass().si() * scale.mass();
         mounts = model.mounts();
@@ -73,7 +77,8 @@ public final class RigidBody6 implements LinearSystem {
             }
             elementLabels.add(mounts.size() > 1 ? "mount '" + mount.name() + "'" : "");
         }
-        core = new MatrixModel(m, rows, 3, modalRatio, NAMES, READINGS);
+        core = new MatrixModel(m, rows, 3, modalRatio, NAMES, READINGS, scale,
+                sameModel.filter(b -> b.model == model).map(b -> b.core.modesForScaling()));
     }
 
     private double[] relative(Point p) {

@@ -1,5 +1,6 @@
 package org.resonancegate.dynamics;
 
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.resonancegate.spec.Damping;
 import org.resonancegate.spec.Model;
@@ -16,10 +17,23 @@ public final class SystemBuilder {
     }
 
     public static LinearSystem build(Model model, ModelScale scale) {
+        return build(model, scale, Optional.empty());
+    }
+
+    /**
+     * As {@link #build(Model, ModelScale)}, reusing the modes of {@code sameModel} when it is
+     * this very model built at another tolerance scale: a tolerance case scales every stiffness
+     * by one factor and every mass by another, which leaves the mode shapes and scales the
+     * eigenvalues exactly, so one eigen solution serves every case (a different model, or none,
+     * and the eigenproblem is solved).
+     */
+    public static LinearSystem build(Model model, ModelScale scale, Optional<LinearSystem> sameModel) {
         if (model instanceof Model.Lumped lumped) {
-            return new LumpedLine(lumped, scale, modalRatio(lumped.damping()));
+            return new LumpedLine(lumped, scale, modalRatio(lumped.damping()),
+                    sameModel.filter(LumpedLine.class::isInstance).map(LumpedLine.class::cast));
         } else if (model instanceof Model.RigidBody body) {
-            return new RigidBody6(body, scale, modalRatio(body.damping()));
+            return new RigidBody6(body, scale, modalRatio(body.damping()),
+                    sameModel.filter(RigidBody6.class::isInstance).map(RigidBody6.class::cast));
         }
         Model.Single single = (Model.Single) model;
         double nominalMass = single.mass().si();
@@ -38,7 +52,7 @@ public final class SystemBuilder {
     }
 
     /** A model-level damping as a modal ratio; empty when the elements carry the damping. */
-    private static OptionalDouble modalRatio(java.util.Optional<Damping> damping) {
+    private static OptionalDouble modalRatio(Optional<Damping> damping) {
         return damping.isPresent() ? OptionalDouble.of(DampingRatios.ratioOf(damping.get())) : OptionalDouble.empty();
     }
 
