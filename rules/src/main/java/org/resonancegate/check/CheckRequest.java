@@ -11,10 +11,17 @@ import java.util.List;
  *                    profile may lie outside it
  * @param specFiles   the candidate spec files (profiles among them are recognised and skipped)
  * @param clock       the build's clock; waivers are judged against its local date
+ * @param curves      whether to work out the response curves the HTML report plots (several
+ *                    times the cost of judging); without them {@code curves} in the results is empty
  */
-public record CheckRequest(Path projectBase, List<Path> specFiles, Clock clock) {
+public record CheckRequest(Path projectBase, List<Path> specFiles, Clock clock, boolean curves) {
 
     public CheckRequest {
         specFiles = List.copyOf(specFiles);
+    }
+
+    /** A request with the response curves, for a run that writes every report. */
+    public CheckRequest(Path projectBase, List<Path> specFiles, Clock clock) {
+        this(projectBase, specFiles, clock, true);
     }
 }

@@ -37,12 +37,12 @@ public final class CheckRunner {
         LocalDate today = LocalDate.now(request.clock());
         List<LoadedSpec> loaded = source.load(request.projectBase(), request.specFiles());
         Stream<LoadedSpec> specs = parallel ? loaded.parallelStream() : loaded.stream();
-        List<SpecResult> results = new ArrayList<>(specs.map(l -> evaluate(l, today)).toList());
+        List<SpecResult> results = new ArrayList<>(specs.map(l -> evaluate(l, today, request.curves())).toList());
         results.sort(Comparator.comparing(SpecResult::file));
         return new Results(results);
     }
 
-    static SpecResult evaluate(LoadedSpec loaded, LocalDate today) {
+    static SpecResult evaluate(LoadedSpec loaded, LocalDate today, boolean curves) {
         if (!loaded.diagnostics().isEmpty() || loaded.spec().isEmpty()) {
             List<ErrorEntry> errors = new ArrayList<>();
             for (Diagnostic d : loaded.diagnostics()) {
@@ -51,7 +51,7 @@ public final class CheckRunner {
             return new SpecResult(loaded.file(), loaded.id(), SpecStatus.ERROR, List.of(), List.of(), errors);
         }
         try {
-            return SpecEvaluator.evaluate(loaded.spec().get(), today);
+            return SpecEvaluator.evaluate(loaded.spec().get(), today, curves);
         } catch (RuntimeException e) {
             // A defect in the engine must not turn into a pass or hide the other specs.
             return new SpecResult(loaded.file(), loaded.id(), SpecStatus.ERROR, List.of(), List.of(),

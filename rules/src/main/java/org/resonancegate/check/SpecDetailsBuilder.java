@@ -28,7 +28,7 @@ final class SpecDetailsBuilder {
     }
 
     static SpecDetails build(Spec spec, List<ToleranceCase> cases, List<RuleContext> contexts,
-                             List<CheckResult> checks) {
+                             List<CheckResult> checks, boolean withCurves) {
         List<ResponseCurve> curves = new ArrayList<>();
         Optional<Interference> interference = Optional.empty();
         for (Criterion criterion : spec.criteria()) {
@@ -41,6 +41,9 @@ final class SpecDetailsBuilder {
             if (criterion instanceof Criterion.Separation s && interference.isEmpty()) {
                 interference = Optional.of(interference(spec, contexts.get(i), basis,
                         OptionalDouble.of(s.margin().value()), Optional.of(s.id())));
+            }
+            if (!withCurves) {
+                continue;
             }
             ResponseCurves.of(criterion, contexts.get(i)).ifPresent(c -> curves.add(curve(criterion.id(), basis, c)));
         }

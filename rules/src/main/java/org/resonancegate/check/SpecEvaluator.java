@@ -33,7 +33,17 @@ public final class SpecEvaluator {
     private SpecEvaluator() {
     }
 
+    /** As {@link #evaluate(Spec, LocalDate, boolean)}, with the response curves the HTML report draws. */
     public static SpecResult evaluate(Spec spec, LocalDate today) {
+        return evaluate(spec, today, true);
+    }
+
+    /**
+     * @param curves whether to work out each amplitude criterion's response curve over speed for
+     *               the plots; it reads the model at some 130 speeds per criterion, several times
+     *               the cost of judging, so a run that draws no plots leaves it out
+     */
+    public static SpecResult evaluate(Spec spec, LocalDate today, boolean curves) {
         List<ErrorEntry> errors = new ArrayList<>();
         List<ToleranceCase> cases = ToleranceCase.all(spec.tolerances());
         List<RuleContext> contexts = new ArrayList<>();
@@ -78,7 +88,7 @@ public final class SpecEvaluator {
             }
         }
         return new SpecResult(spec.file(), Optional.of(spec.id()), status(checks, errors), modes, checks, errors,
-                SpecDetailsBuilder.build(spec, cases, contexts, checks));
+                SpecDetailsBuilder.build(spec, cases, contexts, checks, curves));
     }
 
     private static CheckResult judge(Spec spec, Criterion criterion, List<ToleranceCase> cases,

@@ -27,7 +27,7 @@ import org.resonancegate.report.SpecStatus;
  * <pre>
  * mvn -q -B -f rules test-compile dependency:build-classpath -Dmdep.outputFile=cp.txt
  * java -Xmx512m -cp rules/target/classes:rules/target/test-classes:$(cat rules/cp.txt) \
- *      org.resonancegate.bench.ScaleRun /tmp/rg-scale 10000 0.1.0-SNAPSHOT
+ *      org.resonancegate.bench.ScaleRun /tmp/rg-scale 10000 0.1.0-SNAPSHOT [curves]
  * (cd /tmp/rg-scale &amp;&amp; MAVEN_OPTS=-Xmx512m mvn -B -o verify)                          # with the check
  * (cd /tmp/rg-scale &amp;&amp; MAVEN_OPTS=-Xmx512m mvn -B -o verify -Dresonance-gate.skip=true) # Maven alone
  * </pre>
@@ -41,13 +41,15 @@ public final class ScaleRun {
         Path project = Path.of(args.length > 0 ? args[0] : "target/scale-project").toAbsolutePath();
         int count = args.length > 1 ? Integer.parseInt(args[1]) : 10_000;
         String pluginVersion = args.length > 2 ? args[2] : "0.1.0-SNAPSHOT";
+        // "curves": also the HTML report's response curves, as a run that writes report.html does
+        boolean curves = args.length > 3 && args[3].equals("curves");
         List<Path> files = write(project, count, pluginVersion);
 
         for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
             pool.resetPeakUsage();
         }
         long start = System.nanoTime();
-        Results results = CheckRun.run(new CheckRequest(project, files, Pipeline.CLOCK));
+        Results results = CheckRun.run(new CheckRequest(project, files, Pipeline.CLOCK, curves));
         double seconds = (System.nanoTime() - start) / 1e9;
         long peak = 0;
         for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
