@@ -47,6 +47,18 @@ class ResponseCurvesTest {
     }
 
     @Test
+    void aRunThatDrawsNoPlotsLeavesTheCurvesOutButJudgesTheSame() {
+        var spec = spec(single(M, K, ZETA), range(600, 1200), List.of(unbalance("rotor", 1, U * 1e6)),
+                List.of(velocity("VEL", 4.5, Criterion.VelocityMeasure.RMS)));
+        SpecResult with = SpecEvaluator.evaluate(spec, LocalDate.of(2026, 6, 1), true);
+        SpecResult without = SpecEvaluator.evaluate(spec, LocalDate.of(2026, 6, 1), false);
+        assertEquals(1, with.details().curves().size());
+        assertEquals(0, without.details().curves().size());
+        assertEquals(with.checks(), without.checks(), "the verdict does not depend on the plot data");
+        assertEquals(with.details().interference(), without.details().interference());
+    }
+
+    @Test
     void samplesReachBeyondTheRangeAndIncludeTheResonanceSpeed() {
         SpecResult r = SpecEvaluator.evaluate(spec(single(M, K, ZETA), range(1200, 1800),
                 List.of(unbalance("rotor", 1, 2000)),
