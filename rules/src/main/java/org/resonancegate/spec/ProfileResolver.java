@@ -33,7 +33,8 @@ final class ProfileResolver {
     }
 
     private final ProjectPaths paths;
-    private final Map<Path, ProfileFile> cache = new HashMap<>();
+    // concurrent: the specs of one run are read in parallel and share their profiles
+    private final Map<Path, ProfileFile> cache = new java.util.concurrent.ConcurrentHashMap<>();
 
     ProfileResolver(ProjectPaths paths) {
         this.paths = paths;

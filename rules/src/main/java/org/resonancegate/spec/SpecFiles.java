@@ -31,9 +31,19 @@ public interface SpecFiles {
 
     byte[] read(Path file) throws IOException;
 
+    /** Whether several threads may read at once (the disk may; a Git object reader may not). */
+    default boolean concurrent() {
+        return false;
+    }
+
     /** The plain file system. */
     enum Disk implements SpecFiles {
         INSTANCE;
+
+        @Override
+        public boolean concurrent() {
+            return true;
+        }
 
         @Override
         public boolean exists(Path file) {

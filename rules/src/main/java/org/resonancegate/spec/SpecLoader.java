@@ -45,10 +45,10 @@ public final class SpecLoader {
         for (Path f : files) {
             unique.add(paths.absolute(f));
         }
-        List<Read> reads = new ArrayList<>();
-        for (Path file : unique) {
-            readOne(file, paths, resolver).ifPresent(reads::add);
-        }
+        // Each file is read on its own (profiles are shared through the resolver's concurrent
+        // cache); the list keeps the input order whichever thread finishes first.
+        List<Read> reads = (contents.concurrent() ? unique.parallelStream() : unique.stream())
+                .map(file -> readOne(file, paths, resolver)).flatMap(Optional::stream).toList();
         List<LoadedSpec> loaded = markDuplicateIds(reads);
         loaded.sort(Comparator.comparing(LoadedSpec::file));
         return List.copyOf(loaded);

@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Pattern;
 
 /**
  * Every unit a spec may use, by dimension, with its exact factor to SI.
@@ -20,6 +21,10 @@ import java.util.Optional;
  * as an angular frequency (the engine works in rad/s).
  */
 public final class UnitTable {
+
+    // compiled once, before the tables below use them: every quantity in every spec is normalised
+    private static final Pattern SPACES = Pattern.compile("\\s+");
+    private static final Pattern BARE_SQUARE = Pattern.compile("(?<=[A-Za-z])2(?![0-9])");
 
     /** Standard gravity, m/s² (3rd CGPM 1901; ISO 80000-3). */
     public static final double STANDARD_GRAVITY = 9.80665;
@@ -130,10 +135,9 @@ public final class UnitTable {
         String s = unit.strip()
                 .replace('\u03BC', '\u00B5')
                 .replace('\u22C5', '\u00B7')
-                .replace('*', '\u00B7')
-                .replaceAll("\\s+", "\u00B7")
-                .replace("^2", "²");
-        return s.replaceAll("(?<=[A-Za-z])2(?![0-9])", "²");
+                .replace('*', '\u00B7');
+        s = SPACES.matcher(s).replaceAll("\u00B7").replace("^2", "²");
+        return BARE_SQUARE.matcher(s).replaceAll("²");
     }
 
     /** The unit of that dimension with that spelling, if there is one. */
