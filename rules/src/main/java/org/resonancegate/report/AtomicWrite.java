@@ -23,6 +23,7 @@ public final class AtomicWrite {
         Path temp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
         try {
             Files.write(temp, bytes);
+            readableLikeAnyFile(temp);
             try {
                 Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {
@@ -31,6 +32,17 @@ public final class AtomicWrite {
             }
         } finally {
             Files.deleteIfExists(temp);
+        }
+    }
+
+    /**
+     * A temporary file is created readable by its owner alone; a report is read by CI artifact
+     * publishers and web servers running as other users, so it gets the permissions an ordinary
+     * new file gets (rw-r--r--), where the file system has POSIX permissions.
+     */
+    private static void readableLikeAnyFile(Path file) throws IOException {
+        if (Files.getFileStore(file).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
         }
     }
 }

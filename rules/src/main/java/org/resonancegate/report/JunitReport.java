@@ -49,6 +49,8 @@ public final class JunitReport {
             XMLStreamWriter x = FACTORY.createXMLStreamWriter(out, "UTF-8");
             x.writeStartDocument("UTF-8", "1.0");
             x.writeCharacters("\n");
+            x.writeComment(" " + ConsoleReport.CAUTION + " ");
+            x.writeCharacters("\n");
             x.writeStartElement("testsuites");
             x.writeAttribute("name", EngineInfo.NAME);
             counts(x, Counts.of(results));
@@ -83,6 +85,7 @@ public final class JunitReport {
         property(x, "file", spec.file());
         spec.id().ifPresent(id -> property(x, "id", id));
         property(x, "status", spec.status().key());
+        property(x, "caution", ConsoleReport.CAUTION);
         x.writeCharacters("\n    ");
         x.writeEndElement();
         for (ErrorEntry error : spec.errors()) {

@@ -75,6 +75,7 @@ public final class ResultsJson {
     private static void writeResults(JsonGenerator g, Results results) {
         g.writeStartObject();
         g.writeStringProperty("format", FORMAT);
+        g.writeStringProperty("caution", ConsoleReport.CAUTION);
         g.writeArrayPropertyStart("specs");
         for (SpecResult spec : results.specs()) {
             writeSpec(g, spec);

@@ -99,7 +99,7 @@ public final class SarifReport {
                 "The base directory of the Maven project that was checked.")));
         SarifLog.Driver driver = new SarifLog.Driver(EngineInfo.NAME, EngineInfo.version(), List.copyOf(rules));
         return new SarifLog(SCHEMA, "2.1.0", List.of(new SarifLog.Run(new SarifLog.Tool(driver), bases,
-                "utf16CodeUnits", List.copyOf(out), results.baseline().map(SarifReport::baselineProperties))));
+                "utf16CodeUnits", List.copyOf(out), Optional.of(runProperties(results)))));
     }
 
     /**
@@ -123,6 +123,14 @@ public final class SarifReport {
             return Optional.of("new");
         }
         return Optional.of(change.get().changed() ? "updated" : "unchanged");
+    }
+
+    /** The caution every report carries, and with a baseline what it was and what it fixed. */
+    private static SortedMap<String, Object> runProperties(Results results) {
+        SortedMap<String, Object> p = new TreeMap<>();
+        p.put("caution", ConsoleReport.CAUTION);
+        results.baseline().ifPresent(c -> p.putAll(baselineProperties(c)));
+        return p;
     }
 
     private static SortedMap<String, Object> baselineProperties(Comparison c) {

@@ -88,6 +88,17 @@ class ReportFormatTest {
     }
 
     @Test
+    void aReportIsReadableByOtherUsersLikeAnyNewFile() throws IOException {
+        Path target = dir.resolve("report.txt");
+        AtomicWrite.write(target, new byte[] {1});
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.getFileStore(target)
+                .supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class), "POSIX permissions");
+        // common practice, no source: CI publishers and web servers read reports as other users
+        assertEquals("rw-r--r--", java.nio.file.attribute.PosixFilePermissions.toString(
+                Files.getPosixFilePermissions(target)));
+    }
+
+    @Test
     void aFailedWriteLeavesNoTemporaryFileAndTheOldFileWhole() throws IOException {
         Path target = dir.resolve("busy");
         Files.createDirectories(target.resolve("inside")); // a non-empty directory cannot be replaced by a file

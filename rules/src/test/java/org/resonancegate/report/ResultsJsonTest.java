@@ -33,6 +33,7 @@ class ResultsJsonTest {
         String expected = """
                 {
                   "format": "resonance-gate-results/1",
+                  "caution": "Caution: a screening aid on linear models. Final designs need a qualified engineer, commissioning measurements and the applicable local codes and standards.",
                   "specs": [
                     {
                       "file": "src/vibration/p1.json",
@@ -111,7 +112,8 @@ class ResultsJsonTest {
 
     @Test
     void emptyResultsAreAValidDocument() {
-        assertEquals("{\n  \"format\": \"resonance-gate-results/1\",\n  \"specs\": []\n}\n",
+        assertEquals("{\n  \"format\": \"resonance-gate-results/1\",\n  \"caution\": \"" + ConsoleReport.CAUTION
+                + "\",\n  \"specs\": []\n}\n",
                 ResultsJson.toJson(new Results(List.of())));
     }
 
