@@ -166,6 +166,12 @@ public abstract class AbstractGateMojo extends AbstractMojo {
                     + " is a file, not a directory; point resonance-gate.specDirectory at the folder holding the specs");
         }
         List<Path> files = collect(specs);
+        List<String> missing = new SpecFileScanner(includeList(), excludeList()).missingNamedFiles(specs, files);
+        if (!missing.isEmpty()) {
+            throw new MojoExecutionException("resonance-gate: includes name " + missing + " but no such file is in "
+                    + display(base, specs) + (excludeList().isEmpty() ? "" : " (or an exclude removes it)")
+                    + "; correct the name (paths are relative to specDirectory), or drop it from includes");
+        }
         if (files.isEmpty()) {
             return new SpecRun(new Results(List.of()), "no file in " + display(base, specs) + " matches includes "
                     + includeList() + (excludeList().isEmpty() ? "" : " minus excludes " + excludeList()));

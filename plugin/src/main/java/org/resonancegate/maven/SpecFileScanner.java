@@ -38,6 +38,19 @@ final class SpecFileScanner {
         }
     }
 
+    /**
+     * The includes, as written, that name a single file (no wildcard) which is not among
+     * {@code found}: a mistyped or deleted file name would otherwise leave a spec unchecked
+     * without a word, while the other includes still find something.
+     */
+    List<String> missingNamedFiles(Path directory, List<Path> found) {
+        List<String> names = found.stream().map(file -> relative(directory, file)).toList();
+        return includes.stream().map(GlobPattern::toString)
+                .filter(p -> p.chars().noneMatch(c -> c == '*' || c == '?' || c == '[' || c == '{'))
+                .filter(p -> names.stream().noneMatch(GlobPattern.of(p)::matches))
+                .toList();
+    }
+
     boolean selected(String relativePath) {
         return includes.stream().anyMatch(p -> p.matches(relativePath))
                 && excludes.stream().noneMatch(p -> p.matches(relativePath));

@@ -142,7 +142,8 @@ class CheckMojoTest {
         assertTrue(e.getMessage().contains("no spec directory src/no-such-folder; nothing was checked"), e.getMessage());
         assertTrue(e.getMessage().contains("resonance-gate.requireSpecs=false"), e.getMessage());
         String text = Files.readString(basedir().resolve("target/empty/results.json"));
-        assertEquals("{\n  \"format\": \"resonance-gate-results/1\",\n  \"specs\": []\n}\n", text);
+        assertEquals("{\n  \"format\": \"resonance-gate-results/1\",\n  \"caution\": \""
+                + org.resonancegate.report.ConsoleReport.CAUTION + "\",\n  \"specs\": []\n}\n", text);
     }
 
     @Test
@@ -196,6 +197,17 @@ class CheckMojoTest {
     void includesMatchingNothingFail(CheckMojo mojo) {
         MojoFailureException e = assertThrows(MojoFailureException.class, mojo::execute);
         assertTrue(e.getMessage().contains("no file in src/vibration matches includes [*.yaml]; nothing was checked"),
+                e.getMessage());
+    }
+
+    @Test
+    @Basedir("/unit/mixed")
+    @InjectMojo(goal = "check", pom = "pom.xml")
+    @MojoParameter(name = "includes", value = "chiller-pump.json,chiller-pmp.json")
+    @MojoParameter(name = "outputDirectory", value = "${project.basedir}/target/misnamed")
+    void anIncludeNamingAFileThatIsNotThereStopsTheBuildEvenWhenAnotherMatches(CheckMojo mojo) {
+        MojoExecutionException e = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertTrue(e.getMessage().contains("includes name [chiller-pmp.json] but no such file is in src/vibration"),
                 e.getMessage());
     }
 
