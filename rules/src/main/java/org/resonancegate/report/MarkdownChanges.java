@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.StringJoiner;
 
 /**
@@ -30,10 +31,16 @@ final class MarkdownChanges {
     static void lead(Comparison c, boolean fullReport, StringBuilder md) {
         long[] n = new long[Transition.values().length];
         c.specs().forEach(s -> s.criteria().forEach(k -> n[k.transition().ordinal()]++));
+        // "new" also counts warnings (they are findings too); say how many of them fail
+        long newWarnings = c.specs().stream().flatMap(s -> s.criteria().stream())
+                .filter(k -> k.transition() == Transition.NEW && k.currentStatus().equals(Optional.of(CheckStatus.WARNING)))
+                .count();
+        long newFailing = n[Transition.NEW.ordinal()] - newWarnings;
         long changed = c.specs().stream().filter(s -> s.kind() != SpecChange.Kind.UNCHANGED).count();
         md.append("**Against ").append(MarkdownSummary.cell(c.ref(), MAX_TEXT)).append(" (`")
                 .append(ChangeWords.shortCommit(c).replaceAll("[^0-9a-fA-F]", "")).append("`): ")
-                .append(n[Transition.NEW.ordinal()]).append(" new failing, ")
+                .append(newFailing).append(" new failing, ")
+                .append(newWarnings > 0 ? newWarnings + (newWarnings == 1 ? " new warning, " : " new warnings, ") : "")
                 .append(n[Transition.CARRIED_OVER.ordinal()]).append(" carried over, ")
                 .append(n[Transition.FIXED.ordinal()]).append(" fixed; ")
                 .append(changed).append(changed == 1 ? " spec changed" : " specs changed").append("**\n\n");
