@@ -9,8 +9,9 @@ import org.resonancegate.report.Interference;
 /**
  * The interference diagram: natural frequencies as level lines with their separation bands,
  * each order of running speed as a line through the origin (f = k·n/60), the operating range
- * shaded, and a marker where an order meets a mode (n = 60·f/k): filled and ringed where the
- * band it enters overlaps the operating range, which is what the separation rule forbids.
+ * shaded, and a marker where an order meets a mode (n = 60·f/k), hollow; where the order runs
+ * inside the band within the operating range (what the separation rule forbids) that stretch is
+ * thickened and a filled marker sits on it, at the speed nearest the crossing.
  *
  * <p>With a baseline, the modes that moved are drawn again, dashed, at their frequency at the
  * baseline, so a reviewer sees where a mode came from on its way into (or out of) a band.
@@ -178,8 +179,18 @@ final class InterferencePlot {
                     double z = Math.min(hi, d.maxSpeedRpm());
                     b.poly(new double[] {xs.at(a), xs.at(z)}, new double[] {ys.at(k * a / 60), ys.at(k * z / 60)},
                             "hitseg", clipId);
-                    b.dot(xs.at(n), ys.at(f), 7, "hit", where + (margin > 0 ? ", inside the "
-                            + Units.percent(margin) + " band within the operating range" : ", within the operating range"));
+                    // the centre-line crossing may lie outside the range while the band's edge reaches into
+                    // it: the filled marker goes on the order line at the speed of the overlap nearest the
+                    // crossing, so it sits inside both the band and the range; the crossing itself stays hollow
+                    double at = Math.min(Math.max(n, a), z);
+                    if (at != n) {
+                        b.dot(xs.at(n), ys.at(f), 4, "cross", where + ", outside the operating range");
+                    }
+                    b.dot(xs.at(at), ys.at(k * at / 60), 7, "hit", order(k) + " inside the band of mode " + m.index()
+                            + " (" + Units.number(f) + " Hz"
+                            + (margin > 0 ? " ± " + Units.percent(margin) : "") + ") at " + Units.number(at)
+                            + " rpm, within the operating range" + (at != n ? "; it meets the mode itself at "
+                            + Units.number(n) + " rpm" : ""));
                 } else {
                     b.dot(xs.at(n), ys.at(f), 4, "cross", where + ", outside the operating range");
                 }

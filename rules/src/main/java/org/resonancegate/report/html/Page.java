@@ -38,7 +38,16 @@ public record Page(String heading, String summary, String summaryStatus, String 
     /** One line of the overview table. */
     /** {@code change}: the spec's change since the baseline ("changed", "added", ...), empty without one. */
     public record Row(String anchor, String id, String title, String file, String status, long pass, long fail,
-                      long warning, long waived, int errors, String headline, String change) {
+                      long warning, long waived, int errors, List<Broken> headline, String change) {
+
+        /** The file path cut after each '/', so the template can offer a line break there and nowhere else. */
+        public List<String> fileParts() {
+            return List.of(file.split("(?<=/)"));
+        }
+    }
+
+    /** One entry of the overview's "what broke": {@code status} (fail, warning, waived, error) picks the style. */
+    public record Broken(String status, String text) {
     }
 
     public record SpecView(String anchor, String id, String title, String revision, String file, String status,

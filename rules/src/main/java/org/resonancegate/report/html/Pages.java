@@ -62,22 +62,28 @@ final class Pages {
         return n + (n == 1 ? " spec: " : " specs: ") + parts;
     }
 
-    /** What a reviewer reads first in the overview: the first broken criterion, or the first error. */
-    static String headline(SpecResult spec) {
+    /**
+     * What a reviewer reads first in the overview: the errors, else the broken criteria, failing
+     * ones before warnings (waived last), each with its status for the style.
+     */
+    static List<Page.Broken> headline(SpecResult spec) {
+        List<Page.Broken> out = new ArrayList<>();
         if (!spec.errors().isEmpty()) {
-            return spec.errors().get(0).message();
+            out.add(new Page.Broken("error", spec.errors().get(0).message()));
+            return out;
         }
-        StringJoiner j = new StringJoiner("; ");
-        for (CheckResult c : spec.checks()) {
-            if (c.status() != CheckStatus.PASS) {
-                Units u = SpecViews.units(spec, c);
-                String worst = SpecViews.value(c, u);
-                String at = c.speedRpm().isPresent() ? " at " + Units.number(c.speedRpm().getAsDouble()) + " rpm" : "";
-                j.add(c.criterion() + " " + c.rule() + " " + c.status().key() + ": " + worst + " against "
-                        + SpecViews.value(c.rule(), c.limit(), u) + at);
+        for (CheckStatus s : List.of(CheckStatus.FAIL, CheckStatus.WARNING, CheckStatus.WAIVED)) {
+            for (CheckResult c : spec.checks()) {
+                if (c.status() == s) {
+                    Units u = SpecViews.units(spec, c);
+                    String worst = SpecViews.value(c, u);
+                    String at = c.speedRpm().isPresent() ? " at " + Units.number(c.speedRpm().getAsDouble()) + " rpm" : "";
+                    out.add(new Page.Broken(s.key(), c.criterion() + " " + c.rule() + " " + s.key() + ": " + worst
+                            + " against " + SpecViews.value(c.rule(), c.limit(), u) + at));
+                }
             }
         }
-        return j.length() == 0 ? "" : j.toString();
+        return out;
     }
 
     static String where(SourceLocation l) {

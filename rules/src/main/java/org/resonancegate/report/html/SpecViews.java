@@ -37,7 +37,8 @@ final class SpecViews {
                     + d.marginCriterion().map(id -> ", the case that governs " + id).orElse("")
                     + (d.margin().isPresent() ? "; bands ± " + Units.percent(d.margin().getAsDouble())
                     + " around each mode" : "; no separation criterion, so no bands")
-                    + ". A ringed marker: an order meets a mode's band inside the operating range.";
+                    + ". A filled marker on a thick stretch: an order meets a mode's band inside the operating"
+                    + " range; a hollow marker: an order crosses a mode's line outside the operating range.";
             Optional<InterferencePlot.Baseline> was = Changes.overlay(baseline, spec.file());
             interference = Optional.of(new Page.PlotView("Interference diagram", note,
                     InterferencePlot.draw(d, "p" + number + "i", was)));

@@ -55,7 +55,7 @@ class HtmlReportTest {
     private static final Set<String> ELEMENTS = Set.of("html", "head", "meta", "title", "style", "body", "header",
             "h1", "h2", "h3", "div", "span", "main", "p", "table", "thead", "tbody", "tr", "th", "td", "a", "b", "br",
             "section", "figure", "figcaption", "ul", "li", "svg", "defs", "clippath", "rect", "line", "polyline",
-            "circle", "text", "footer", "#root");
+            "circle", "text", "footer", "wbr", "#root");
     private static final Set<String> ATTRIBUTES = Set.of("lang", "charset", "name", "content", "class", "href", "id",
             "viewbox", "role", "aria-label", "aria-hidden", "x", "y", "width", "height", "x1", "y1", "x2", "y2",
             "points", "clip-path", "cx", "cy", "r", "text-anchor", "transform", "colspan");

@@ -52,6 +52,44 @@ class PlotGeometryTest {
         assertEquals(yOf(svg, 8), Double.parseDouble(band.y()) + Double.parseDouble(band.h()), 0.2);
     }
 
+    /**
+     * The order meets the mode's centre line below the range, yet its band reaches into the range:
+     * the filled marker must sit where the order line is inside both. Closed form (common practice,
+     * no source: the definition of an order and of a ±margin band): order k is f = k·n/60, the band
+     * is f_mode·(1 ± margin), so the order is in the band for 60·f_mode·(1 ± margin)/k; with
+     * f_mode = 10 Hz, margin 0.2, k = 1 that is 480 to 720 rpm, overlapping 650 to 1000 rpm over
+     * 650 to 720 rpm; the point of it nearest the crossing at 600 rpm is 650 rpm.
+     */
+    @Test
+    void aBandReachingIntoTheRangeIsMarkedInsideBothNotAtTheCentreLine() {
+        double fMode = 10;
+        double margin = 0.2;
+        double k = 1;
+        double nMin = 650;
+        double nMax = 1000;
+        Interference d = new Interference("nominal", List.of(new Interference.ModeLine(1, fMode)),
+                OptionalDouble.of(margin), Optional.of("SEP"), List.of(new Interference.ExcitationLine("running speed",
+                OptionalDouble.of(k), OptionalDouble.empty())), nMin, nMax);
+        Svg svg = InterferencePlot.draw(d, "c");
+        List<Svg.Dot> hits = svg.dots().stream().filter(x -> x.cls().equals("hit")).toList();
+        assertEquals(1, hits.size());
+        double rpm = rpmOf(svg, Double.parseDouble(hits.get(0).cx()));
+        double hz = hzOf(svg, Double.parseDouble(hits.get(0).cy()));
+        double tol = 0.5; // pixels are written with one decimal: 0.05 px is about 0.13 rpm here
+        assertTrue(rpm >= nMin - tol && rpm <= nMax + tol, "marker at " + rpm + " rpm, outside the range");
+        assertTrue(hz >= fMode * (1 - margin) - 0.01 && hz <= fMode * (1 + margin) + 0.01,
+                "marker at " + hz + " Hz, outside the band");
+        assertEquals(k * rpm / 60, hz, 0.01, "the marker sits on the order line");
+        double lo = Math.max(60 * fMode * (1 - margin) / k, nMin);
+        double hi = Math.min(60 * fMode * (1 + margin) / k, nMax);
+        assertEquals(Math.min(Math.max(60 * fMode / k, lo), hi), rpm, tol);
+        // the crossing of the centre line, below the range, stays as a hollow marker at 600 rpm and 10 Hz
+        List<Svg.Dot> hollow = svg.dots().stream().filter(x -> x.cls().equals("cross")).toList();
+        assertEquals(1, hollow.size());
+        assertEquals(60 * fMode / k, rpmOf(svg, Double.parseDouble(hollow.get(0).cx())), tol);
+        assertEquals(fMode, hzOf(svg, Double.parseDouble(hollow.get(0).cy())), 0.01);
+    }
+
     @Test
     void aFixedFrequencyInsideABandIsMarkedAcrossTheRange() {
         Interference d = new Interference("nominal", List.of(new Interference.ModeLine(1, 10)), OptionalDouble.of(0.2),
@@ -88,6 +126,18 @@ class PlotGeometryTest {
             out[i] = new double[] {Double.parseDouble(xy[0]), Double.parseDouble(xy[1])};
         }
         return out;
+    }
+
+    /** The speed at pixel x, from the speed-axis ticks labelled 500 and 1000. */
+    private static double rpmOf(Svg svg, double x) {
+        double x500 = tickX(svg, 500);
+        return 500 + (x - x500) * 500 / (tickX(svg, 1000) - x500);
+    }
+
+    /** The frequency at pixel y, from the frequency-axis ticks labelled 0 and 10. */
+    private static double hzOf(Svg svg, double y) {
+        double y0 = tickY(svg, "0");
+        return (y - y0) * 10 / (tickY(svg, "10") - y0);
     }
 
     /** The x of the speed-axis tick labelled {@code rpm}. */
