@@ -3,8 +3,12 @@ package org.resonancegate.check;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import java.util.stream.Stream;
+import org.resonancegate.report.DetailedSpecs;
 import org.resonancegate.report.ErrorEntry;
 import org.resonancegate.report.Results;
 import org.resonancegate.report.SpecResult;
@@ -36,9 +40,19 @@ public final class CheckRunner {
     static Results run(CheckRequest request, SpecSource source, boolean parallel) {
         LocalDate today = LocalDate.now(request.clock());
         List<LoadedSpec> loaded = source.load(request.projectBase(), request.specFiles());
+        // Curves go only to the specs shown in full (all of a small run); in a large run those
+        // are known once every spec is judged, and judging them again with curves gives the same verdict.
+        boolean curvesForAll = request.curves() && loaded.size() <= DetailedSpecs.LIMIT;
         Stream<LoadedSpec> specs = parallel ? loaded.parallelStream() : loaded.stream();
-        List<SpecResult> results = new ArrayList<>(specs.map(l -> evaluate(l, today, request.curves())).toList());
+        List<SpecResult> results = new ArrayList<>(specs.map(l -> evaluate(l, today, curvesForAll)).toList());
         results.sort(Comparator.comparing(SpecResult::file));
+        if (request.curves() && !curvesForAll) {
+            Set<String> detailed = DetailedSpecs.files(results);
+            Map<String, LoadedSpec> byFile = new HashMap<>();
+            loaded.forEach(l -> byFile.put(l.file(), l));
+            results.replaceAll(r -> detailed.contains(r.file()) && byFile.containsKey(r.file())
+                    ? evaluate(byFile.get(r.file()), today, true) : r);
+        }
         return new Results(results);
     }
 

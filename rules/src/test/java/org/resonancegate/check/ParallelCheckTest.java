@@ -52,4 +52,35 @@ class ParallelCheckTest {
         // and again, now that every class is loaded and the threads race harder
         assertArrayEquals(ResultsJson.toBytes(sequential), ResultsJson.toBytes(CheckRunner.run(request, SpecLoader::load, true)));
     }
+
+    @Test
+    void aLargeRunShowsAHundredSpecsInFullWorstFirstAndJudgesEveryOneTheSame() throws IOException {
+        List<Path> files = new ArrayList<>();
+        SpecGenerator generator = new SpecGenerator(7L);
+        for (int i = 0; i < 130; i++) {
+            Path file = project.resolve("src/vibration/s-" + (1000 + i) + ".json");
+            Files.createDirectories(file.getParent());
+            String text = generator.any("BIG-" + i);
+            Files.writeString(file, i % 20 == 19 ? text.replace("\"kind\": ", "\"knid\": ") : text);
+            files.add(file);
+        }
+        Results plain = CheckRunner.run(new CheckRequest(project, files, Pipeline.CLOCK, false), SpecLoader::load, true);
+        Results full = CheckRunner.run(new CheckRequest(project, files, Pipeline.CLOCK, true), SpecLoader::load, true);
+        java.util.Set<String> shown = org.resonancegate.report.DetailedSpecs.files(full.specs());
+        assertEquals(org.resonancegate.report.DetailedSpecs.LIMIT, shown.size());
+        for (int i = 0; i < full.specs().size(); i++) {
+            var spec = full.specs().get(i);
+            assertEquals(plain.specs().get(i).checks(), spec.checks(), "the verdict does not depend on the plot data");
+            if (spec.status() != SpecStatus.PASS) {
+                assertTrue(shown.contains(spec.file()), "a spec that is not a clean pass comes first: " + spec.file());
+            }
+            if (!shown.contains(spec.file())) {
+                assertTrue(spec.details().curves().isEmpty(), "no curves for a spec not shown: " + spec.file());
+            }
+        }
+        assertTrue(full.specs().stream().anyMatch(s -> shown.contains(s.file()) && !s.details().curves().isEmpty()));
+        String html = org.resonancegate.report.html.HtmlReport.render(full);
+        assertEquals(org.resonancegate.report.DetailedSpecs.LIMIT, html.split("<section class=\"spec ", -1).length - 1);
+        assertTrue(html.contains("Shown in full below: 100 of 130 specs"), "the page says what it leaves out");
+    }
 }

@@ -7,7 +7,9 @@ import java.util.Optional;
  * Everything the page template shows, already worded: the template only places and escapes it.
  * Status words double as style classes ("pass", "fail", "warning", "waived", "error").
  */
-public record Page(String heading, String summary, String summaryStatus, String caution, Optional<Changes> changes,
+/** {@code shown}: when only some specs have a section, a sentence saying which; empty otherwise. */
+public record Page(String heading, String summary, String summaryStatus, String caution, String shown,
+                   Optional<Changes> changes,
                    List<Row> overview, List<SpecView> specs) {
 
     /**

@@ -5,10 +5,12 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.StringJoiner;
 import org.resonancegate.report.CheckResult;
 import org.resonancegate.report.CheckStatus;
 import org.resonancegate.report.ConsoleReport;
+import org.resonancegate.report.DetailedSpecs;
 import org.resonancegate.report.ErrorEntry;
 import org.resonancegate.report.InputValue;
 import org.resonancegate.report.ModeResult;
@@ -28,21 +30,31 @@ final class Pages {
         List<Page.Row> rows = new ArrayList<>();
         List<Page.SpecView> specs = new ArrayList<>();
         Map<String, String> anchors = new HashMap<>();
+        Set<String> detailed = DetailedSpecs.files(results.specs());
         for (int i = 0; i < results.specs().size(); i++) {
             SpecResult spec = results.specs().get(i);
-            String anchor = "spec-" + (i + 1);
-            anchors.put(spec.file(), anchor);
+            boolean full = detailed.contains(spec.file());
+            String anchor = full ? "spec-" + (i + 1) : "";
+            if (full) {
+                anchors.put(spec.file(), anchor);
+            }
             rows.add(new Page.Row(anchor, spec.id().orElse("(no id)"), spec.details().title().orElse(""), spec.file(),
                     spec.status().key(), count(spec, CheckStatus.PASS), count(spec, CheckStatus.FAIL),
                     count(spec, CheckStatus.WARNING), count(spec, CheckStatus.WAIVED), spec.errors().size(),
                     headline(spec), Changes.kind(results.baseline(), spec.file())));
-            specs.add(SpecViews.of(spec, anchor, i + 1, results.baseline()));
+            if (full) {
+                specs.add(SpecViews.of(spec, anchor, i + 1, results.baseline()));
+            }
         }
         long failing = results.specs().stream()
                 .filter(s -> s.status() == SpecStatus.FAIL || s.status() == SpecStatus.ERROR).count();
         String status = failing > 0 ? "fail"
                 : results.specs().stream().anyMatch(s -> s.status() == SpecStatus.WAIVED) ? "waived" : "pass";
-        return new Page("Vibration check", summary(results), status, ConsoleReport.CAUTION,
+        int n = results.specs().size();
+        String shown = detailed.size() == n ? "" : "Shown in full below: " + detailed.size() + " of " + n
+                + " specs, those with errors, failures, waivers and warnings first; the others appear in this overview"
+                + " only, and every spec's complete record is in results.json.";
+        return new Page("Vibration check", summary(results), status, ConsoleReport.CAUTION, shown,
                 results.baseline().map(c -> Changes.of(c, anchors)), rows, specs);
     }
 

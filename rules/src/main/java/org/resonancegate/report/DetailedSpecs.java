@@ -1,0 +1,46 @@
+package org.resonancegate.report;
+
+import java.util.Comparator;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Which specs a run shows in full (a section with plots in the HTML report, response curves in
+ * the results). A run of a few specs shows every one; a large one shows {@value #LIMIT}, the ones
+ * a reviewer must look at first: errors, then failures, waived failures and warnings, then
+ * passes, each group in file order. The rest stay in the overview and in every other report: a
+ * page of ten thousand sections with plots helps nobody and would not fit a build's memory.
+ */
+public final class DetailedSpecs {
+
+    /** Specs shown in full at most. */
+    public static final int LIMIT = 100;
+
+    private DetailedSpecs() {
+    }
+
+    /** The files of the specs shown in full, in file order. */
+    public static Set<String> files(List<SpecResult> specs) {
+        if (specs.size() <= LIMIT) {
+            Set<String> all = new LinkedHashSet<>();
+            specs.forEach(s -> all.add(s.file()));
+            return all;
+        }
+        Set<String> chosen = new LinkedHashSet<>();
+        specs.stream().sorted(Comparator.comparingInt(DetailedSpecs::urgency).thenComparing(SpecResult::file))
+                .limit(LIMIT).forEach(s -> chosen.add(s.file()));
+        Set<String> ordered = new LinkedHashSet<>();
+        specs.stream().map(SpecResult::file).filter(chosen::contains).sorted().forEach(ordered::add);
+        return ordered;
+    }
+
+    private static int urgency(SpecResult spec) {
+        return switch (spec.status()) {
+            case ERROR -> 0;
+            case FAIL -> 1;
+            case WAIVED -> 2;
+            case PASS -> spec.checks().stream().anyMatch(c -> c.status() == CheckStatus.WARNING) ? 3 : 4;
+        };
+    }
+}
