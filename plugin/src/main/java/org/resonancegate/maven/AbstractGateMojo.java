@@ -184,15 +184,33 @@ public abstract class AbstractGateMojo extends AbstractMojo {
     /** @return the file a person should open first */
     private static Path writeReports(Path base, Path output, Results results, Set<ReportFormat> chosen)
             throws MojoExecutionException {
+        Optional<String> inRepository = folderInWorkTree(base);
         for (ReportFormat format : chosen) {
             try {
-                format.write(results, output, chosen);
+                format.write(results, output, chosen, inRepository);
             } catch (IOException | RuntimeException e) {
                 throw new MojoExecutionException("resonance-gate: cannot write "
                         + display(base, output.resolve(format.fileName())) + ": " + e, e);
             }
         }
         return output.resolve(ReportFormat.forReaders(chosen).orElseThrow().fileName());
+    }
+
+    /**
+     * The project's folder relative to the Git work tree it sits in ({@code "sample-project/"}),
+     * found by the nearest {@code .git} above it; empty at the work tree's root or outside one.
+     */
+    static Optional<String> folderInWorkTree(Path base) {
+        for (Path dir = base; dir != null; dir = dir.getParent()) {
+            if (Files.exists(dir.resolve(".git"))) {
+                if (dir.equals(base)) {
+                    return Optional.empty();
+                }
+                Path rel = dir.relativize(base);
+                return Optional.of(rel.toString().replace(rel.getFileSystem().getSeparator(), "/") + "/");
+            }
+        }
+        return Optional.empty();
     }
 
     private void appendSummary(Path base, Path target, Path output, Results results, Set<ReportFormat> chosen)

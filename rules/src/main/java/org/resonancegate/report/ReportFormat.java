@@ -20,17 +20,17 @@ import org.resonancegate.units.Suggestions;
  * order, so {@code results.json} (the record the others are drawn from) comes first.
  */
 public enum ReportFormat {
-    JSON("json", ResultsJson.FILE_NAME, 3, (results, file, chosen) -> ResultsJson.write(results, file)),
-    HTML("html", HtmlReport.FILE_NAME, 1, (results, file, chosen) -> HtmlReport.write(results, file)),
-    MARKDOWN("markdown", MarkdownSummary.FILE_NAME, 2, (results, file, chosen) -> MarkdownSummary.write(results,
+    JSON("json", ResultsJson.FILE_NAME, 3, (results, file, chosen, place) -> ResultsJson.write(results, file)),
+    HTML("html", HtmlReport.FILE_NAME, 1, (results, file, chosen, place) -> HtmlReport.write(results, file)),
+    MARKDOWN("markdown", MarkdownSummary.FILE_NAME, 2, (results, file, chosen, place) -> MarkdownSummary.write(results,
             EngineInfo.NAME, ReportFormat.fullReport(chosen).map(ReportFormat::fileName), file)),
-    SARIF("sarif", SarifReport.FILE_NAME, 4, (results, file, chosen) -> SarifReport.write(results, file)),
-    JUNIT("junit", JunitReport.FILE_NAME, 5, (results, file, chosen) -> JunitReport.write(results, file));
+    SARIF("sarif", SarifReport.FILE_NAME, 4, (results, file, chosen, place) -> SarifReport.write(results, file, place)),
+    JUNIT("junit", JunitReport.FILE_NAME, 5, (results, file, chosen, place) -> JunitReport.write(results, file));
 
     /** Writes one format's file; {@code chosen} lets a summary link to the other files written beside it. */
     @FunctionalInterface
     interface Writer {
-        void write(Results results, Path file, Set<ReportFormat> chosen) throws IOException;
+        void write(Results results, Path file, Set<ReportFormat> chosen, Optional<String> place) throws IOException;
     }
 
     private final String key;
@@ -66,8 +66,18 @@ public enum ReportFormat {
      * @return the file written
      */
     public Path write(Results results, Path directory, Set<ReportFormat> chosen) throws IOException {
+        return write(results, directory, chosen, Optional.empty());
+    }
+
+    /**
+     * As {@link #write(Results, Path, Set)}, for a project that sits in a sub-folder of its Git
+     * work tree: {@code projectInRepository} is that folder with a trailing {@code /}, so SARIF
+     * can name paths a code-review tool resolves from the checkout.
+     */
+    public Path write(Results results, Path directory, Set<ReportFormat> chosen, Optional<String> projectInRepository)
+            throws IOException {
         Path file = directory.resolve(fileName);
-        writer.write(results, file, chosen);
+        writer.write(results, file, chosen, projectInRepository);
         return file;
     }
 

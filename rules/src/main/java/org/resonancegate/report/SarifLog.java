@@ -38,8 +38,13 @@ record SarifLog(@JsonProperty("$schema") String schema, String version, List<Run
     record Configuration(String level) {
     }
 
-    /** An {@code artifactLocation} naming a base without fixing it: the consumer supplies the directory. */
-    record UriBase(Message description) {
+    /**
+     * An {@code artifactLocation} naming a base: without a {@code uri} the consumer supplies the
+     * directory; with one, relative to another base ({@code uriBaseId}).
+     */
+    @JsonInclude(JsonInclude.Include.NON_ABSENT)
+    @JsonPropertyOrder({"uri", "uriBaseId", "description"})
+    record UriBase(Optional<String> uri, Optional<String> uriBaseId, Message description) {
     }
 
     @JsonInclude(JsonInclude.Include.NON_ABSENT)

@@ -53,6 +53,7 @@ public final class SarifReport {
 
     static final String SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
     static final String PROJECT_ROOT = "PROJECTROOT";
+    static final String SOURCE_ROOT = "SRCROOT";
 
     private static final JsonMapper MAPPER = JsonMapper.builder().build();
 
@@ -60,18 +61,29 @@ public final class SarifReport {
     }
 
     public static byte[] toBytes(Results results) {
+        return toBytes(results, Optional.empty());
+    }
+
+    /**
+     * @param projectInRepository the project's folder relative to the root of its Git work tree,
+     *                            with a trailing {@code /} ({@code "sample-project/"}), when it is
+     *                            not the root itself: then {@code PROJECTROOT} is declared relative
+     *                            to {@code SRCROOT}, the work tree, so a code-review tool that knows
+     *                            only the checkout finds every file
+     */
+    public static byte[] toBytes(Results results, Optional<String> projectInRepository) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        MAPPER.writer().with(new ResultsJsonPrinter()).writeValue(out, log(results));
+        MAPPER.writer().with(new ResultsJsonPrinter()).writeValue(out, log(results, projectInRepository));
         out.write('\n');
         return out.toByteArray();
     }
 
     /** Writes the log to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
-    public static void write(Results results, Path target) throws IOException {
-        AtomicWrite.write(target, toBytes(results));
+    public static void write(Results results, Path target, Optional<String> projectInRepository) throws IOException {
+        AtomicWrite.write(target, toBytes(results, projectInRepository));
     }
 
-    static SarifLog log(Results results) {
+    static SarifLog log(Results results, Optional<String> projectInRepository) {
         List<String> ruleIds = new ArrayList<>();
         List<SarifLog.Descriptor> rules = new ArrayList<>();
         for (Rule rule : Rule.values()) {
@@ -95,8 +107,15 @@ public final class SarifReport {
             out.add(result(row, ruleId, ruleIndex, baselineState(results.baseline(), row), transition));
         }
         SortedMap<String, SarifLog.UriBase> bases = new TreeMap<>();
-        bases.put(PROJECT_ROOT, new SarifLog.UriBase(new SarifLog.Message(
-                "The base directory of the Maven project that was checked.")));
+        String what = "The base directory of the Maven project that was checked.";
+        if (projectInRepository.isPresent()) {
+            bases.put(PROJECT_ROOT, new SarifLog.UriBase(projectInRepository, Optional.of(SOURCE_ROOT),
+                    new SarifLog.Message(what)));
+            bases.put(SOURCE_ROOT, new SarifLog.UriBase(Optional.empty(), Optional.empty(),
+                    new SarifLog.Message("The root of the Git work tree that holds the project.")));
+        } else {
+            bases.put(PROJECT_ROOT, new SarifLog.UriBase(Optional.empty(), Optional.empty(), new SarifLog.Message(what)));
+        }
         SarifLog.Driver driver = new SarifLog.Driver(EngineInfo.NAME, EngineInfo.version(), List.copyOf(rules));
         return new SarifLog(SCHEMA, "2.1.0", List.of(new SarifLog.Run(new SarifLog.Tool(driver), bases,
                 "utf16CodeUnits", List.copyOf(out), Optional.of(runProperties(results)))));

@@ -69,6 +69,22 @@ class SarifReportTest {
     }
 
     @Test
+    void aProjectInASubFolderOfItsRepositoryIsPlacedUnderTheWorkTreeRoot() {
+        String sarif = new String(SarifReport.toBytes(EngineRuns.mixed(dir), java.util.Optional.of("plant/pumps/")),
+                StandardCharsets.UTF_8);
+        assertEquals(List.of(), problems(sarif));
+        JsonNode bases = JSON.readTree(sarif).get("runs").get(0).get("originalUriBaseIds");
+        // from memory (SARIF 2.1.0, originalUriBaseIds): a base may be relative to another base through uriBaseId
+        assertEquals("plant/pumps/", bases.get("PROJECTROOT").get("uri").asString());
+        assertEquals("SRCROOT", bases.get("PROJECTROOT").get("uriBaseId").asString());
+        assertTrue(bases.has("SRCROOT"));
+        assertFalse(bases.get("SRCROOT").has("uri"), "the consumer supplies the checkout");
+        JsonNode plain = JSON.readTree(SarifReport.toBytes(EngineRuns.mixed(dir.resolve("x")))).get("runs").get(0)
+                .get("originalUriBaseIds");
+        assertFalse(plain.get("PROJECTROOT").has("uri"), "a project at the root names no folder");
+    }
+
+    @Test
     void oneResultPerFindingWithRuleLevelAndTheGoverningLine() throws IOException {
         Results results = EngineRuns.mixed(dir);
         JsonNode run = JSON.readTree(SarifReport.toBytes(results)).get("runs").get(0);
