@@ -29,15 +29,17 @@ public final class QuantityParser {
     public static UnitParse parse(String written, Dimension expected, String key) {
         // The SI style puts a (narrow) no-break space between number and unit; editors paste those too.
         String text = written.replace('\u00A0', ' ').replace('\u202F', ' ').replace('\u2009', ' ');
+        // the words of a message are put together only when there is one: every value of every spec passes here
         String what = UnitTable.describe(expected);
-        String accepted = UnitTable.acceptedSymbols(expected);
-        String example = exampleFor(expected, "1");
         if (NON_FINITE.matcher(text).matches()) {
+            String example = exampleFor(expected, "1");
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" is not a finite number; write " + article(what)
                     + what + " such as \"" + example + "\"");
         }
         Matcher m = NUMBER_AND_UNIT.matcher(text);
         if (!m.matches()) {
+            String example = exampleFor(expected, "1");
+            String accepted = UnitTable.acceptedSymbols(expected);
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" does not start with a number; write " + article(what)
                     + what + " as \"<number> <unit>\", such as \"" + example + "\" (units: " + accepted + ")");
         }
@@ -49,10 +51,11 @@ public final class QuantityParser {
                     + " is too large to hold (beyond ±1.8e308); write a finite " + what);
         }
         if (unitText.isEmpty()) {
+            String accepted = UnitTable.acceptedSymbols(expected);
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" has no unit; " + article(what) + what
                     + " needs one, such as \"" + exampleFor(expected, number) + "\" (units: " + accepted + ")");
         }
-        if (unitText.matches(",\\d.*")) {
+        if (unitText.length() > 1 && unitText.charAt(0) == ',' && unitText.charAt(1) >= '0' && unitText.charAt(1) <= '9') {
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" uses a decimal comma; write the decimal"
                     + " point as '.', such as \"" + number + "." + unitText.substring(1) + "\"");
         }
@@ -70,6 +73,7 @@ public final class QuantityParser {
             }
             return new UnitParse.Value(si, unit.get());
         }
+        String accepted = UnitTable.acceptedSymbols(expected);
         List<Unit> others = UnitTable.findAny(unitText);
         if (!others.isEmpty()) {
             String is = others.stream().map(u -> UnitTable.describe(u.dimension()))
