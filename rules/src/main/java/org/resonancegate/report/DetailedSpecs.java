@@ -20,7 +20,7 @@ public final class DetailedSpecs {
     private DetailedSpecs() {
     }
 
-    /** The files of the specs shown in full, in file order. */
+    /** The files of the specs shown in full, in the order of {@code specs}. */
     public static Set<String> files(List<SpecResult> specs) {
         if (specs.size() <= LIMIT) {
             Set<String> all = new LinkedHashSet<>();
@@ -30,8 +30,9 @@ public final class DetailedSpecs {
         Set<String> chosen = new LinkedHashSet<>();
         specs.stream().sorted(Comparator.comparingInt(DetailedSpecs::urgency).thenComparing(SpecResult::file))
                 .limit(LIMIT).forEach(s -> chosen.add(s.file()));
+        // in the order given (results are in file order), whatever the order of choosing
         Set<String> ordered = new LinkedHashSet<>();
-        specs.stream().map(SpecResult::file).filter(chosen::contains).sorted().forEach(ordered::add);
+        specs.stream().map(SpecResult::file).filter(chosen::contains).forEach(ordered::add);
         return ordered;
     }
 
