@@ -24,7 +24,13 @@ sealed interface JsonNode {
         }
 
         Optional<Member> member(String key) {
-            return members.stream().filter(m -> m.key().equals(key)).findFirst();
+            // a plain loop: every key of every spec is looked up here, and objects are small
+            for (Member m : members) {
+                if (m.key().equals(key)) {
+                    return Optional.of(m);
+                }
+            }
+            return Optional.empty();
         }
 
         Optional<JsonNode> get(String key) {

@@ -105,8 +105,13 @@ public final class SpecLoader {
         }
         List<LoadedSpec> out = new ArrayList<>();
         for (Read r : reads) {
+            boolean shared = r.id().isPresent() && byId.get(r.id().get()).size() > 1;
+            if (!shared && r.diagnostics().isEmpty() && r.spec().isPresent()) {
+                out.add(new LoadedSpec(r.file(), r.id(), r.spec(), List.of())); // the usual case, nothing to sort
+                continue;
+            }
             List<Diagnostic> diagnostics = new ArrayList<>(r.diagnostics());
-            if (r.id().isPresent() && byId.get(r.id().get()).size() > 1) {
+            if (shared) {
                 List<String> others = byId.get(r.id().get()).stream()
                         .filter(o -> o != r).map(Read::file).sorted().toList();
                 diagnostics.add(new Diagnostic(r.idLocation().orElse(new SourceLocation(r.file(), 1, 1)),

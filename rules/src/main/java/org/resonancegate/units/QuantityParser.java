@@ -2,7 +2,6 @@ package org.resonancegate.units;
 
 import java.util.List;
 import java.util.Optional;
-import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
@@ -13,8 +12,6 @@ import java.util.stream.Collectors;
  */
 public final class QuantityParser {
 
-    private static final Pattern NUMBER_AND_UNIT =
-            Pattern.compile("\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)(\\s*)(.*?)\\s*");
     private static final Pattern NON_FINITE =
             Pattern.compile("\\s*[+-]?(?:nan|inf|infinity|∞)\\b.*", Pattern.CASE_INSENSITIVE);
 
@@ -29,22 +26,23 @@ public final class QuantityParser {
     public static UnitParse parse(String written, Dimension expected, String key) {
         // The SI style puts a (narrow) no-break space between number and unit; editors paste those too.
         String text = written.replace('\u00A0', ' ').replace('\u202F', ' ').replace('\u2009', ' ');
-        // the words of a message are put together only when there is one: every value of every spec passes here
+        // every value of every spec passes here: a hand-written scan instead of a regex, and the
+        // words of a message are put together only when there is one
         String what = UnitTable.describe(expected);
-        if (NON_FINITE.matcher(text).matches()) {
-            String example = exampleFor(expected, "1");
-            return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" is not a finite number; write " + article(what)
-                    + what + " such as \"" + example + "\"");
-        }
-        Matcher m = NUMBER_AND_UNIT.matcher(text);
-        if (!m.matches()) {
+        Scan m = Scan.of(text);
+        if (m == null) {
+            if (NON_FINITE.matcher(text).matches()) {
+                String example = exampleFor(expected, "1");
+                return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" is not a finite number; write " + article(what)
+                        + what + " such as \"" + example + "\"");
+            }
             String example = exampleFor(expected, "1");
             String accepted = UnitTable.acceptedSymbols(expected);
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" does not start with a number; write " + article(what)
                     + what + " as \"<number> <unit>\", such as \"" + example + "\" (units: " + accepted + ")");
         }
-        String number = m.group(1);
-        String unitText = m.group(3);
+        String number = m.number();
+        String unitText = m.unit();
         double value = Double.parseDouble(number);
         if (Double.isInfinite(value)) {
             return new UnitParse.Problem("\"" + key + "\": the number " + number
@@ -59,7 +57,7 @@ public final class QuantityParser {
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" uses a decimal comma; write the decimal"
                     + " point as '.', such as \"" + number + "." + unitText.substring(1) + "\"");
         }
-        if (m.group(2).isEmpty()) {
+        if (!m.spaced()) {
             // The format writes number, space, unit; a file that runs them together would read
             // differently elsewhere (and "5e3" against "5 e3" shows why the space matters).
             return new UnitParse.Problem("\"" + key + "\": \"" + text + "\" needs a space between the number and"
@@ -99,5 +97,85 @@ public final class QuantityParser {
     /** An example for messages, with the number the user wrote and the dimension's usual unit. */
     public static String exampleFor(Dimension dimension, String number) {
         return number + " " + UnitTable.usualSymbol(dimension);
+    }
+
+    /**
+     * {@code text} split as {@code <spaces><number><spaces><unit><spaces>}, the number being
+     * {@code [+-]digits[.digits][e[+-]digits]} or {@code [+-].digits[e[+-]digits]}; null when it
+     * does not start with a number, or when the unit holds a line break.
+     *
+     * @param spaced whether a space separates the number from the unit
+     */
+    private record Scan(String number, boolean spaced, String unit) {
+
+        static Scan of(String text) {
+            int n = text.length();
+            int i = skipSpaces(text, 0);
+            int start = i;
+            if (i < n && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
+                i++;
+            }
+            int intDigits = digits(text, i);
+            i += intDigits;
+            if (intDigits > 0) {
+                if (i < n && text.charAt(i) == '.') {
+                    i += 1 + digits(text, i + 1);
+                }
+            } else {
+                int fraction = i < n && text.charAt(i) == '.' ? digits(text, i + 1) : 0;
+                if (fraction == 0) {
+                    return null;
+                }
+                i += 1 + fraction;
+            }
+            if (i < n && (text.charAt(i) == 'e' || text.charAt(i) == 'E')) {
+                int j = i + 1;
+                if (j < n && (text.charAt(j) == '+' || text.charAt(j) == '-')) {
+                    j++;
+                }
+                int exponent = digits(text, j);
+                if (exponent > 0) {
+                    i = j + exponent;
+                }
+            }
+            String number = text.substring(start, i);
+            int unitStart = skipSpaces(text, i);
+            int end = n;
+            while (end > unitStart && isSpace(text.charAt(end - 1))) {
+                end--;
+            }
+            for (int k = unitStart; k < end; k++) {
+                if (isLineBreak(text.charAt(k))) {
+                    return null;
+                }
+            }
+            return new Scan(number, unitStart > i, text.substring(unitStart, end));
+        }
+
+        private static int digits(String text, int from) {
+            int i = from;
+            while (i < text.length() && text.charAt(i) >= '0' && text.charAt(i) <= '9') {
+                i++;
+            }
+            return i - from;
+        }
+
+        private static int skipSpaces(String text, int from) {
+            int i = from;
+            while (i < text.length() && isSpace(text.charAt(i))) {
+                i++;
+            }
+            return i;
+        }
+
+        /** The characters a regular expression's {@code \s} matches. */
+        private static boolean isSpace(char c) {
+            return c == ' ' || c == '\t' || c == '\n' || c == 0x0B || c == '\f' || c == '\r';
+        }
+
+        /** The line terminators a regular expression's {@code .} does not match. */
+        private static boolean isLineBreak(char c) {
+            return c == '\n' || c == '\r' || c == '\u0085' || c == '\u2028' || c == '\u2029';
+        }
     }
 }

@@ -12,9 +12,13 @@ public record Unit(String symbol, Dimension dimension, double factor) {
      * rather than 7.1 × 0.001, whose rounding would show as 0.0070999999999999995 in reports.
      */
     public double toSi(String number) {
-        int exponent = (int) Math.round(Math.log10(factor));
-        if (factor == Double.parseDouble("1e" + exponent)) {
-            return new java.math.BigDecimal(number).scaleByPowerOfTen(exponent).doubleValue();
+        int exponent = factor == 1 ? 0 : (int) Math.round(Math.log10(factor));
+        if (factor == 1 || factor == Double.parseDouble("1e" + exponent)) {
+            // both ways round the exact decimal once; the text way avoids a BigDecimal per value
+            double si = number.indexOf('e') < 0 && number.indexOf('E') < 0
+                    ? Double.parseDouble(exponent == 0 ? number : number + "e" + exponent)
+                    : new java.math.BigDecimal(number).scaleByPowerOfTen(exponent).doubleValue();
+            return si == 0 ? 0.0 : si; // "-0 mm" is zero, as a decimal number has no sign of zero
         }
         return Double.parseDouble(number) * factor;
     }

@@ -142,9 +142,17 @@ public final class UnitTable {
 
     /** The unit of that dimension with that spelling, if there is one. */
     public static Optional<Unit> find(String spelling, Dimension dimension) {
-        return BY_SPELLING.getOrDefault(normalise(spelling), List.of()).stream()
-                .filter(u -> u.dimension() == dimension)
-                .findFirst();
+        // most values are written in a table spelling, which normalises to itself: skip the regexes then
+        List<Unit> units = BY_SPELLING.get(spelling);
+        if (units == null) {
+            units = BY_SPELLING.getOrDefault(normalise(spelling), List.of());
+        }
+        for (Unit u : units) {
+            if (u.dimension() == dimension) {
+                return Optional.of(u);
+            }
+        }
+        return Optional.empty();
     }
 
     /** Every unit, of any dimension, with that spelling. */
