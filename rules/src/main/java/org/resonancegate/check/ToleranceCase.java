@@ -5,6 +5,7 @@ import java.util.List;
 import org.resonancegate.dynamics.ModelScale;
 import org.resonancegate.spec.Dimensionless;
 import org.resonancegate.spec.Tolerances;
+import org.resonancegate.units.Decimal;
 
 /**
  * One model case within the tolerances: the nominal model or a corner of the box. The order of
@@ -44,9 +45,7 @@ public record ToleranceCase(String name, ModelScale scale) {
     }
 
     private static String signedPercent(double fraction) {
-        java.math.BigDecimal p = new java.math.BigDecimal(fraction * 100)
-                .round(new java.math.MathContext(4)).stripTrailingZeros();
-        String text = p.abs().toPlainString();
+        String text = Decimal.text(Math.abs(fraction * 100), 4, java.math.RoundingMode.HALF_UP);
         return (fraction < 0 ? "-" : "+") + text + " %";
     }
 }

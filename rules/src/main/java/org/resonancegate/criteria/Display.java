@@ -1,11 +1,9 @@
 package org.resonancegate.criteria;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
-import java.math.RoundingMode;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.resonancegate.spec.Quantity;
+import org.resonancegate.units.Decimal;
 
 /** Number formatting for messages: deterministic, locale-independent, a few significant digits. */
 final class Display {
@@ -18,15 +16,7 @@ final class Display {
 
     /** {@code x} rounded to {@code digits} significant digits, without trailing zeros. */
     static String sig(double x, int digits) {
-        if (!Double.isFinite(x)) {
-            return Double.toString(x);
-        }
-        if (x == 0) {
-            return "0";
-        }
-        BigDecimal rounded = new BigDecimal(x).round(new MathContext(digits, RoundingMode.HALF_EVEN));
-        String text = rounded.stripTrailingZeros().toPlainString();
-        return text.equals("-0") ? "0" : text;
+        return Decimal.text(x, digits);
     }
 
     static String sig(double x) {
@@ -48,10 +38,7 @@ final class Display {
     }
 
     private static double twelveDigits(double x) {
-        if (!Double.isFinite(x) || x == 0) {
-            return x;
-        }
-        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
+        return Decimal.round(x, 12);
     }
 
     /** A running speed (rad/s) in rpm. */

@@ -1,0 +1,137 @@
+package org.resonancegate.units;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+
+/**
+ * A double rounded to a number of significant decimal digits, exactly as {@link BigDecimal}
+ * rounds the double's exact binary value, but without building that value when the answer is
+ * clear from double arithmetic: every number in every message and report passes here, and the
+ * exact expansion of a double runs to fifty digits.
+ *
+ * <p>Why the quick way is exact: scaling by an exact power of ten (10⁰ … 10²² are doubles) costs
+ * one rounding, an error below {@code 10^digits × 2⁻⁵³}. Unless the scaled value lies that close
+ * to a half, it rounds the same way as the exact value; near a half (a tie, or almost one) the
+ * exact way decides.
+ */
+public final class Decimal {
+
+    private static final double[] POWERS_OF_TEN = new double[23];
+
+    static {
+        for (int i = 0; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = Double.parseDouble("1e" + i);
+        }
+    }
+
+    /** The digits kept and the power of ten they stand at: the value is {@code ±digits × 10^exponent}. */
+    private record Rounded(boolean negative, long digits, int exponent) {
+    }
+
+    private Decimal() {
+    }
+
+    /**
+     * {@code x} rounded half-even to {@code digits} significant digits, as plain text without
+     * trailing zeros ({@code 0.0070999 → "0.0071"}, {@code 12345 → "12340"} for 4 digits);
+     * "0" for zero of either sign, {@link Double#toString} for NaN and infinities.
+     */
+    public static String text(double x, int digits) {
+        return text(x, digits, RoundingMode.HALF_EVEN);
+    }
+
+    /**
+     * As {@link #text(double, int)}, rounding ties by {@code ties}: {@link RoundingMode#HALF_EVEN}
+     * or {@link RoundingMode#HALF_UP} (the two differ only at an exact half).
+     */
+    public static String text(double x, int digits, RoundingMode ties) {
+        if (ties != RoundingMode.HALF_EVEN && ties != RoundingMode.HALF_UP) {
+            throw new IllegalArgumentException("rounds to nearest only, not " + ties);
+        }
+        if (!Double.isFinite(x)) {
+            return Double.toString(x);
+        }
+        if (x == 0) {
+            return "0";
+        }
+        Rounded r = quick(x, digits);
+        if (r == null) {
+            String exact = new BigDecimal(x).round(new MathContext(digits, ties))
+                    .stripTrailingZeros().toPlainString();
+            return exact.equals("-0") ? "0" : exact;
+        }
+        long m = r.digits();
+        int k = r.exponent();
+        while (m % 10 == 0) {
+            m /= 10;
+            k++;
+        }
+        String s = Long.toString(m);
+        StringBuilder b = new StringBuilder(s.length() + Math.abs(k) + 3);
+        if (r.negative()) {
+            b.append('-');
+        }
+        if (k >= 0) {
+            b.append(s);
+            b.append("0".repeat(k));
+        } else if (s.length() > -k) {
+            b.append(s, 0, s.length() + k).append('.').append(s, s.length() + k, s.length());
+        } else {
+            b.append("0.").append("0".repeat(-k - s.length())).append(s);
+        }
+        return b.toString();
+    }
+
+    /**
+     * {@code x} rounded half-up to {@code digits} significant digits, back as the nearest double
+     * (what {@code new BigDecimal(x).round(new MathContext(digits)).doubleValue()} gives).
+     */
+    public static double round(double x, int digits) {
+        if (!Double.isFinite(x) || x == 0) {
+            return x;
+        }
+        Rounded r = quick(x, digits);
+        if (r == null) {
+            return new BigDecimal(x).round(new MathContext(digits, RoundingMode.HALF_UP)).doubleValue();
+        }
+        // digits < 2⁵³ and the power of ten are exact, so this is the one rounding BigDecimal does too
+        double magnitude = r.exponent() >= 0 ? r.digits() * POWERS_OF_TEN[r.exponent()]
+                : r.digits() / POWERS_OF_TEN[-r.exponent()];
+        return r.negative() ? -magnitude : magnitude;
+    }
+
+    /** The rounding when double arithmetic settles it; null when only the exact value can. */
+    private static Rounded quick(double x, int digits) {
+        if (digits < 1 || digits > 15) {
+            return null;
+        }
+        double a = Math.abs(x);
+        double low = POWERS_OF_TEN[digits - 1];
+        double high = POWERS_OF_TEN[digits];
+        int k = (int) Math.floor(Math.log10(a)) - digits + 1;
+        for (int attempt = 0; attempt < 3; attempt++) {
+            if (Math.abs(k) >= POWERS_OF_TEN.length) {
+                return null;
+            }
+            double scaled = k >= 0 ? a / POWERS_OF_TEN[k] : a * POWERS_OF_TEN[-k];
+            if (scaled < low) {
+                k--;
+            } else if (scaled >= high) {
+                k++;
+            } else {
+                double floor = Math.floor(scaled);
+                if (Math.abs(scaled - floor - 0.5) <= high * 1e-15) {
+                    return null; // at or next to a half: the exact value decides
+                }
+                long m = (long) floor + (scaled - floor > 0.5 ? 1 : 0);
+                if (m == (long) high) { // 9999.7 → 10000: one digit more, one power up
+                    m /= 10;
+                    k++;
+                }
+                return k < POWERS_OF_TEN.length ? new Rounded(x < 0, m, k) : null;
+            }
+        }
+        return null;
+    }
+}
