@@ -3,8 +3,9 @@ package org.resonancegate.maven;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
 import java.util.stream.Stream;
 
 /**
@@ -30,11 +31,17 @@ final class SpecFileScanner {
     List<Path> scan(Path directory) throws IOException {
         Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
         try (Stream<Path> walk = Files.walk(root)) {
-            return walk.filter(Files::isRegularFile)
+            // each file's relative name is worked out once, not again in every comparison of the sort
+            Map<String, Path> byName = new TreeMap<>();
+            walk.filter(Files::isRegularFile)
                     .map(file -> directory.resolve(root.relativize(file)))
-                    .filter(file -> selected(relative(directory, file)))
-                    .sorted(Comparator.comparing(file -> relative(directory, file)))
-                    .toList();
+                    .forEach(file -> {
+                        String name = relative(directory, file);
+                        if (selected(name)) {
+                            byName.put(name, file);
+                        }
+                    });
+            return List.copyOf(byName.values());
         }
     }
 

@@ -44,19 +44,16 @@ final class RigidBodyChecks {
                 {-inertia.xz(), -inertia.yz(), inertia.zz().si()}};
         double[] principal = new EigenDecomposition(new Array2DRowRealMatrix(j)).getRealEigenvalues();
         Arrays.sort(principal);
-        String written = "xx " + inertia.xx().text() + ", yy " + inertia.yy().text() + ", zz " + inertia.zz().text()
-                + "; products xy " + number(inertia.xy()) + ", xz " + number(inertia.xz()) + ", yz "
-                + number(inertia.yz()) + " kg·m²";
-        String moments = number(principal[0]) + ", " + number(principal[1]) + ", " + number(principal[2]) + " kg·m²";
         double largest = Math.abs(principal[2]);
         if (!(principal[0] > ZERO * largest)) {
-            problems.add(inertia.location(), "the inertia tensor (" + written + ") is not positive definite: its"
-                    + " principal moments are " + moments + ", and a real body has all three positive; the products"
+            problems.add(inertia.location(), "the inertia tensor (" + written(inertia) + ") is not positive definite: its"
+                    + " principal moments are " + moments(principal) + ", and a real body has all three positive; the products"
                     + " of inertia are too large for these moments (check their values and signs)");
             return;
         }
         if (principal[0] + principal[1] < principal[2] * (1 - ZERO)) {
-            problems.add(inertia.location(), "the inertia tensor (" + written + ") has principal moments " + moments
+            problems.add(inertia.location(), "the inertia tensor (" + written(inertia) + ") has principal moments "
+                    + moments(principal)
                     + ", which break the triangle inequality: " + number(principal[0]) + " + " + number(principal[1])
                     + " < " + number(principal[2]) + "; no body has these (each principal moment is at most the sum"
                     + " of the other two); check the moments and products");
@@ -179,6 +176,17 @@ final class RigidBodyChecks {
             }
         }
         return new ArrayList<>(names);
+    }
+
+    /** The tensor as written, for a message (put together only when there is one). */
+    private static String written(Model.Inertia inertia) {
+        return "xx " + inertia.xx().text() + ", yy " + inertia.yy().text() + ", zz " + inertia.zz().text()
+                + "; products xy " + number(inertia.xy()) + ", xz " + number(inertia.xz()) + ", yz "
+                + number(inertia.yz()) + " kg·m²";
+    }
+
+    private static String moments(double[] principal) {
+        return number(principal[0]) + ", " + number(principal[1]) + ", " + number(principal[2]) + " kg·m²";
     }
 
     private static double sq(double v) {
