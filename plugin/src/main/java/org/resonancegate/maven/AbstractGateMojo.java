@@ -1,41 +1,28 @@
 package org.resonancegate.maven;
 
 import java.io.File;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Clock;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.Set;
-import java.util.stream.Collectors;
+import org.apache.maven.artifact.Artifact;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
 import org.apache.maven.plugin.MojoFailureException;
+import org.apache.maven.plugin.descriptor.PluginDescriptor;
 import org.apache.maven.plugin.logging.Log;
 import org.apache.maven.plugins.annotations.Parameter;
-import org.resonancegate.check.CheckRequest;
-import org.resonancegate.check.CheckRun;
-import org.resonancegate.report.AtomicWrite;
 import org.resonancegate.report.ConsoleLine;
-import org.resonancegate.report.ConsoleReport;
-import org.resonancegate.report.EngineInfo;
-import org.resonancegate.report.MarkdownSummary;
-import org.resonancegate.report.ReportFormat;
-import org.resonancegate.report.Results;
 
 /**
- * What the goals share: finding the spec files, running the engine, writing the chosen report
- * files (and the summary copy), and printing the console lines. Each goal then turns the
- * {@link Verdict} into its own outcome ({@link #conclude}).
+ * What the goals share: their parameters, and a {@link GateRun} (find the spec files, run the
+ * engine, write the chosen report files and the summary copy, print the console lines) in Maven's
+ * JVM or in a {@link SeparateJvm}. Each goal then turns the {@link Verdict} into its own outcome
+ * ({@link #conclude}).
  */
 public abstract class AbstractGateMojo extends AbstractMojo {
 
     static final String DEFAULT_INCLUDE = "**/*.json";
-
-    /** Summary copies from modules built in parallel go one at a time, so none is lost. */
-    private static final Object SUMMARY_LOCK = new Object();
 
     /** The project's base directory: report paths are relative to it, and profiles may not leave it. */
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
@@ -110,6 +97,19 @@ public abstract class AbstractGateMojo extends AbstractMojo {
      */
     abstract void conclude(Verdict verdict, String report) throws MojoFailureException;
 
+    /**
+     * Which JVM does the work: {@code same} (Maven's own), {@code separate} (one started for this
+     * run, tuned for a short batch: for thousands of specs it needs about half the processor
+     * time), or {@code auto} (the default: separate from 1,000 spec files on). Output, reports and
+     * verdict are the same either way.
+     */
+    @Parameter(property = "resonance-gate.jvm", defaultValue = "auto")
+    private String jvm;
+
+    /** The plugin's own jar and dependencies, the classpath of a separate JVM. */
+    @Parameter(defaultValue = "${plugin}", readonly = true)
+    private PluginDescriptor plugin;
+
     @Override
     public final void execute() throws MojoExecutionException, MojoFailureException {
         Log log = getLog();
@@ -121,145 +121,67 @@ public abstract class AbstractGateMojo extends AbstractMojo {
             throw new MojoExecutionException("resonance-gate: basedir, specDirectory and outputDirectory must be set"
                     + " (they default to the project's directories; check the plugin configuration)");
         }
-        Set<ReportFormat> chosen = chosenFormats();
-        BaselineOptions compared = BaselineOptions.of(baseline, failOn);
-        Clock clock = Clock.systemDefaultZone();
+        SeparateJvm.Choice choice = SeparateJvm.Choice.parse(jvm).orElseThrow(() -> new MojoExecutionException(
+                "resonance-gate: jvm is \"" + jvm + "\"; use auto (the default), same (Maven's own JVM) or separate"));
         Path base = basedir.toPath().toAbsolutePath().normalize();
-        Path output = base.resolve(outputDirectory.toPath()).normalize();
-        Path specs = base.resolve(specDirectory.toPath()).normalize();
-
-        // the response curves cost more than the judging itself; only the HTML report draws them
-        SpecRun run = findAndRun(base, specs, clock, chosen.contains(ReportFormat.HTML));
-        Results results = compared.compare(base, clock, run.results(), specs,
-                new SpecFileScanner(includeList(), excludeList()));
-        // written before any verdict so a failed build still leaves its record and reports
-        Path reader = writeReports(base, output, results, chosen);
-        if (summaryFile != null) {
-            appendSummary(base, base.resolve(summaryFile.toPath()).normalize(), output, results, chosen);
-        }
-        for (ConsoleLine line : ConsoleReport.lines(results, compared.carriedOverPasses())) {
-            print(log, line);
-        }
-        String others = chosen.stream().filter(f -> !output.resolve(f.fileName()).equals(reader))
-                .map(ReportFormat::fileName).collect(Collectors.joining(", "));
-        log.info("resonance-gate: report: " + display(base, reader) + (others.isEmpty() ? "" : " (also " + others + ")"));
-        Verdict verdict = Verdict.of(compared.verdict(results), run.nothing());
-        verdict.letThrough().ifPresent(note -> log.warn("resonance-gate: " + note));
-        conclude(verdict, display(base, reader));
-    }
-
-    private Set<ReportFormat> chosenFormats() throws MojoExecutionException {
+        GateSettings settings = new GateSettings(base, base.resolve(specDirectory.toPath()).normalize(),
+                base.resolve(outputDirectory.toPath()).normalize(), includeList(), excludeList(),
+                formats == null ? List.of() : formats,
+                Optional.ofNullable(summaryFile).map(f -> base.resolve(f.toPath()).normalize()),
+                Optional.ofNullable(baseline).map(String::trim).filter(b -> !b.isEmpty()),
+                failOn == null ? "" : failOn, artifactId == null ? "" : artifactId);
+        GateRun.Outcome outcome;
         try {
-            return ReportFormat.parse(formats == null ? List.of() : formats);
-        } catch (IllegalArgumentException e) {
-            throw new MojoExecutionException("resonance-gate: " + e.getMessage()
-                    + ". Fix resonance-gate.formats (a comma-separated list), or leave it out to write every format", e);
+            GateRun.validate(settings);
+            Optional<List<Path>> separate = separateClasspath(choice, settings);
+            if (separate.isPresent()) {
+                log.info("resonance-gate: checking in a separate JVM (" + String.join(" ", SeparateJvm.OPTIONS)
+                        + "; resonance-gate.jvm=" + choice.name().toLowerCase(java.util.Locale.ROOT) + ")");
+                outcome = SeparateJvm.run(settings, separate.get(), line -> print(log, line));
+            } else {
+                outcome = GateRun.run(settings, line -> print(log, line));
+            }
+        } catch (GateException e) {
+            throw new MojoExecutionException(e.getMessage(), e.getCause() == null ? e : e.getCause());
         }
+        conclude(outcome.verdict(), outcome.report());
     }
 
-    private SpecRun findAndRun(Path base, Path specs, Clock clock, boolean curves) throws MojoExecutionException {
-        if (!Files.exists(specs)) {
-            return new SpecRun(new Results(List.of()), "no spec directory " + display(base, specs));
+    /** The classpath for a separate JVM when this run goes to one; empty to run here. */
+    private Optional<List<Path>> separateClasspath(SeparateJvm.Choice choice, GateSettings settings)
+            throws GateException, MojoExecutionException {
+        if (choice == SeparateJvm.Choice.SAME
+                || (choice == SeparateJvm.Choice.AUTO && GateRun.specFiles(settings).size() < SeparateJvm.FROM_SPEC_FILES)) {
+            return Optional.empty();
         }
-        if (!Files.isDirectory(specs)) {
-            throw new MojoExecutionException("resonance-gate: specDirectory " + display(base, specs)
-                    + " is a file, not a directory; point resonance-gate.specDirectory at the folder holding the specs");
+        Optional<List<Path>> classpath = pluginClasspath();
+        if (classpath.isEmpty() && choice == SeparateJvm.Choice.SEPARATE) {
+            throw new MojoExecutionException("resonance-gate: jvm=separate, but Maven did not say where the plugin's"
+                    + " jars are; use jvm=same");
         }
-        List<Path> files = collect(specs);
-        List<String> missing = new SpecFileScanner(includeList(), excludeList()).missingNamedFiles(specs, files);
-        if (!missing.isEmpty()) {
-            throw new MojoExecutionException("resonance-gate: includes name " + missing + " but no such file is in "
-                    + display(base, specs) + (excludeList().isEmpty() ? "" : " (or an exclude removes it)")
-                    + "; correct the name (paths are relative to specDirectory), or drop it from includes");
-        }
-        if (files.isEmpty()) {
-            return new SpecRun(new Results(List.of()), "no file in " + display(base, specs) + " matches includes "
-                    + includeList() + (excludeList().isEmpty() ? "" : " minus excludes " + excludeList()));
-        }
-        Results results = run(new CheckRequest(base, files, clock, curves));
-        return new SpecRun(results, results.specs().isEmpty()
-                ? "the files in " + display(base, specs) + " are all profiles, none is a spec" : "");
+        return classpath;
     }
 
-    /** @return the file a person should open first */
-    private static Path writeReports(Path base, Path output, Results results, Set<ReportFormat> chosen)
-            throws MojoExecutionException {
-        Optional<String> inRepository = folderInWorkTree(base);
-        for (ReportFormat format : chosen) {
-            try {
-                format.write(results, output, chosen, inRepository);
-            } catch (IOException | RuntimeException e) {
-                throw new MojoExecutionException("resonance-gate: cannot write "
-                        + display(base, output.resolve(format.fileName())) + ": " + e, e);
+    private Optional<List<Path>> pluginClasspath() {
+        if (plugin == null || plugin.getPluginArtifact() == null || plugin.getPluginArtifact().getFile() == null
+                || plugin.getArtifacts() == null) {
+            return Optional.empty();
+        }
+        List<Path> jars = new ArrayList<>();
+        jars.add(plugin.getPluginArtifact().getFile().toPath());
+        for (Artifact a : plugin.getArtifacts()) {
+            if (a.getFile() == null) {
+                return Optional.empty();
+            }
+            if (!a.getFile().toPath().equals(jars.get(0))) {
+                jars.add(a.getFile().toPath());
             }
         }
-        return output.resolve(ReportFormat.forReaders(chosen).orElseThrow().fileName());
+        return Optional.of(jars);
     }
 
-    /**
-     * The project's folder relative to the Git work tree it sits in ({@code "sample-project/"}),
-     * found by the nearest {@code .git} above it; empty at the work tree's root or outside one.
-     */
     static Optional<String> folderInWorkTree(Path base) {
-        for (Path dir = base; dir != null; dir = dir.getParent()) {
-            if (Files.exists(dir.resolve(".git"))) {
-                if (dir.equals(base)) {
-                    return Optional.empty();
-                }
-                Path rel = dir.relativize(base);
-                return Optional.of(rel.toString().replace(rel.getFileSystem().getSeparator(), "/") + "/");
-            }
-        }
-        return Optional.empty();
-    }
-
-    private void appendSummary(Path base, Path target, Path output, Results results, Set<ReportFormat> chosen)
-            throws MojoExecutionException {
-        // the link is relative to the summary file's own folder, so it resolves wherever that file is read
-        Optional<String> href = ReportFormat.fullReport(chosen).map(f -> relativeLink(target, output.resolve(f.fileName())));
-        String title = EngineInfo.NAME + (artifactId == null || artifactId.isBlank() ? "" : ": " + artifactId);
-        byte[] part = MarkdownSummary.toBytes(results, title, href);
-        synchronized (SUMMARY_LOCK) {
-            try {
-                byte[] before = Files.isRegularFile(target) ? Files.readAllBytes(target) : new byte[0];
-                byte[] separator = before.length == 0 ? new byte[0] : "\n".getBytes(StandardCharsets.UTF_8);
-                byte[] all = new byte[before.length + separator.length + part.length];
-                System.arraycopy(before, 0, all, 0, before.length);
-                System.arraycopy(separator, 0, all, before.length, separator.length);
-                System.arraycopy(part, 0, all, before.length + separator.length, part.length);
-                AtomicWrite.write(target, all);
-            } catch (IOException e) {
-                throw new MojoExecutionException("resonance-gate: cannot write the summary to "
-                        + display(base, target) + " (resonance-gate.summaryFile): " + e, e);
-            }
-        }
-    }
-
-    private static String relativeLink(Path from, Path to) {
-        Path dir = from.getParent();
-        try {
-            Path rel = dir == null ? to : dir.relativize(to);
-            return rel.toString().replace(rel.getFileSystem().getSeparator(), "/");
-        } catch (IllegalArgumentException e) {
-            return to.toUri().toString(); // another drive or root: no relative path leads there
-        }
-    }
-
-    private List<Path> collect(Path specs) throws MojoExecutionException {
-        try {
-            return new SpecFileScanner(includeList(), excludeList()).scan(specs);
-        } catch (IOException | java.io.UncheckedIOException e) {
-            throw new MojoExecutionException("resonance-gate: cannot list the spec files in " + specs + ": " + e, e);
-        }
-    }
-
-    private static Results run(CheckRequest request) throws MojoExecutionException {
-        try {
-            return CheckRun.run(request);
-        } catch (RuntimeException e) {
-            // a spec's own faults come back as diagnostics; anything thrown is the engine's or the disk's
-            throw new MojoExecutionException("resonance-gate: the check could not run: " + e, e);
-        }
+        return GateRun.folderInWorkTree(base);
     }
 
     private List<String> includeList() {
@@ -277,12 +199,5 @@ public abstract class AbstractGateMojo extends AbstractMojo {
             case WARNING -> log.warn(line.text());
             case ERROR -> log.error(line.text());
         }
-    }
-
-    /** A path as the user sees it: relative to the project when inside it, with {@code /}. */
-    static String display(Path base, Path path) {
-        Path shown = path.startsWith(base) ? base.relativize(path) : path;
-        String text = shown.toString().replace(shown.getFileSystem().getSeparator(), "/");
-        return text.isEmpty() ? "." : text;
     }
 }

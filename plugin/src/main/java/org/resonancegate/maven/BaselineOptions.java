@@ -4,7 +4,6 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.util.List;
 import java.util.Optional;
-import org.apache.maven.plugin.MojoExecutionException;
 import org.resonancegate.baseline.BaselineException;
 import org.resonancegate.baseline.BaselineRequest;
 import org.resonancegate.baseline.BaselineRun;
@@ -28,15 +27,15 @@ final class BaselineOptions {
         this.failOn = failOn;
     }
 
-    /** @throws MojoExecutionException for a failOn that is not known, or new-violation without a baseline */
-    static BaselineOptions of(String baseline, String failOn) throws MojoExecutionException {
+    /** @throws GateException for a failOn that is not known, or new-violation without a baseline */
+    static BaselineOptions of(String baseline, String failOn) throws GateException {
         Optional<String> ref = Optional.ofNullable(baseline).map(String::trim).filter(s -> !s.isEmpty());
         String text = failOn == null || failOn.isBlank() ? FailOn.VIOLATION.key() : failOn;
-        FailOn mode = FailOn.parse(text).orElseThrow(() -> new MojoExecutionException("resonance-gate: failOn is \""
+        FailOn mode = FailOn.parse(text).orElseThrow(() -> new GateException("resonance-gate: failOn is \""
                 + text + "\"; use violation (the default: every failing criterion fails the build) or new-violation"
                 + " (only criteria that broke since the baseline do)"));
         if (mode == FailOn.NEW_VIOLATION && ref.isEmpty()) {
-            throw new MojoExecutionException("resonance-gate: failOn=new-violation fails only on criteria that broke"
+            throw new GateException("resonance-gate: failOn=new-violation fails only on criteria that broke"
                     + " since a baseline, but no baseline is set; add -Dresonance-gate.baseline=origin/main (or a"
                     + " tag, a commit, HEAD), or drop failOn to fail on every violation");
         }
@@ -48,7 +47,7 @@ final class BaselineOptions {
      * those the same directory and patterns select at that revision.
      */
     Results compare(Path base, Clock clock, Results results, Path specDirectory, SpecFileScanner selection)
-            throws MojoExecutionException {
+            throws GateException {
         if (ref.isEmpty()) {
             return results;
         }
@@ -56,7 +55,7 @@ final class BaselineOptions {
             return BaselineRun.compare(new CheckRequest(base, List.of(), clock), results,
                     new BaselineRequest(ref.get(), specDirectory, selection::selected));
         } catch (BaselineException e) {
-            throw new MojoExecutionException("resonance-gate: " + e.getMessage(), e);
+            throw new GateException("resonance-gate: " + e.getMessage(), e);
         }
     }
 
