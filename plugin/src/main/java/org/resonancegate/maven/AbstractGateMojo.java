@@ -100,7 +100,7 @@ public abstract class AbstractGateMojo extends AbstractMojo {
     /**
      * Which JVM does the work: {@code same} (Maven's own), {@code separate} (one started for this
      * run, tuned for a short batch: for thousands of specs it needs about half the processor
-     * time), or {@code auto} (the default: separate from 1,000 spec files on). Output, reports and
+     * time), or {@code auto} (the default: separate from 200 spec files on). Output, reports and
      * verdict are the same either way.
      */
     @Parameter(property = "resonance-gate.jvm", defaultValue = "auto")
@@ -137,7 +137,7 @@ public abstract class AbstractGateMojo extends AbstractMojo {
             if (separate.isPresent()) {
                 log.info("resonance-gate: checking in a separate JVM (" + String.join(" ", SeparateJvm.OPTIONS)
                         + "; resonance-gate.jvm=" + choice.name().toLowerCase(java.util.Locale.ROOT) + ")");
-                outcome = SeparateJvm.run(settings, separate.get(), line -> print(log, line));
+                outcome = separately(choice, settings, separate.get(), log);
             } else {
                 outcome = GateRun.run(settings, line -> print(log, line));
             }
@@ -145,6 +145,21 @@ public abstract class AbstractGateMojo extends AbstractMojo {
             throw new MojoExecutionException(e.getMessage(), e.getCause() == null ? e : e.getCause());
         }
         conclude(outcome.verdict(), outcome.report());
+    }
+
+    /** In a separate JVM; when {@code auto} chose one that cannot be started, here after all, with a warning. */
+    private static GateRun.Outcome separately(SeparateJvm.Choice choice, GateSettings settings, List<Path> classpath,
+                                              Log log) throws GateException {
+        try {
+            return SeparateJvm.run(settings, classpath, line -> print(log, line));
+        } catch (SeparateJvm.CannotStart e) {
+            if (choice == SeparateJvm.Choice.SEPARATE) {
+                throw e;
+            }
+            log.warn(e.getMessage().replace("; set resonance-gate.jvm=same to check in Maven's own JVM", "")
+                    + "; checking in Maven's own JVM instead");
+            return GateRun.run(settings, line -> print(log, line));
+        }
     }
 
     /** The classpath for a separate JVM when this run goes to one; empty to run here. */

@@ -5,7 +5,7 @@ package org.resonancegate.maven;
  * that cannot be written. The message is the whole sentence a user reads (it names the parameter
  * or file and says what to do); the goals turn it into a build error.
  */
-final class GateException extends Exception {
+class GateException extends Exception {
 
     private static final long serialVersionUID = 1L;
 

@@ -51,11 +51,14 @@ final class SpecFileScanner {
      * without a word, while the other includes still find something.
      */
     List<String> missingNamedFiles(Path directory, List<Path> found) {
-        List<String> names = found.stream().map(file -> relative(directory, file)).toList();
-        return includes.stream().map(GlobPattern::toString)
+        List<String> named = includes.stream().map(GlobPattern::toString)
                 .filter(p -> p.chars().noneMatch(c -> c == '*' || c == '?' || c == '[' || c == '{'))
-                .filter(p -> names.stream().noneMatch(GlobPattern.of(p)::matches))
                 .toList();
+        if (named.isEmpty()) {
+            return List.of(); // the usual case: only wildcards, and no need to name every file found
+        }
+        List<String> names = found.stream().map(file -> relative(directory, file)).toList();
+        return named.stream().filter(p -> names.stream().noneMatch(GlobPattern.of(p)::matches)).toList();
     }
 
     boolean selected(String relativePath) {
