@@ -3,6 +3,7 @@ package org.resonancegate.units;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.OptionalInt;
 
 /**
  * A double rounded to a number of significant decimal digits, exactly as {@link BigDecimal}
@@ -18,10 +19,13 @@ import java.math.RoundingMode;
 public final class Decimal {
 
     private static final double[] POWERS_OF_TEN = new double[23];
+    /** The doubles nearest 10⁻ⁱ (not exact, but what a unit factor such as 1e-3 is). */
+    private static final double[] NEGATIVE_POWERS_OF_TEN = new double[23];
 
     static {
         for (int i = 0; i < POWERS_OF_TEN.length; i++) {
             POWERS_OF_TEN[i] = Double.parseDouble("1e" + i);
+            NEGATIVE_POWERS_OF_TEN[i] = Double.parseDouble("1e-" + i);
         }
     }
 
@@ -99,6 +103,79 @@ public final class Decimal {
         double magnitude = r.exponent() >= 0 ? r.digits() * POWERS_OF_TEN[r.exponent()]
                 : r.digits() / POWERS_OF_TEN[-r.exponent()];
         return r.negative() ? -magnitude : magnitude;
+    }
+
+    /**
+     * The double nearest to {@code number × 10^exponent}, {@code number} being decimal text such as
+     * {@code "-7.25"} or {@code "1.5e3"}: the decimal point moves exactly and the result is rounded
+     * once, as {@code new BigDecimal(number).scaleByPowerOfTen(exponent).doubleValue()} gives it
+     * (with +0 for a zero of either sign). Up to 15 significant digits and a net power of ten
+     * within ±22 this is one exact division or multiplication; beyond, the text is parsed.
+     */
+    public static double shifted(String number, int exponent) {
+        long digits = 0;
+        int count = 0;
+        int scale = 0;
+        boolean negative = false;
+        boolean point = false;
+        int i = 0;
+        int n = number.length();
+        if (i < n && (number.charAt(i) == '-' || number.charAt(i) == '+')) {
+            negative = number.charAt(i) == '-';
+            i++;
+        }
+        for (; i < n; i++) {
+            char c = number.charAt(i);
+            if (c >= '0' && c <= '9') {
+                if (digits == 0 && c == '0') {
+                    if (point) {
+                        scale--;
+                    }
+                    continue; // leading zeros carry no digits
+                }
+                if (++count > 15) {
+                    return viaText(number, exponent);
+                }
+                digits = digits * 10 + (c - '0');
+                if (point) {
+                    scale--;
+                }
+            } else if (c == '.' && !point) {
+                point = true;
+            } else {
+                return viaText(number, exponent); // an exponent, or anything unexpected
+            }
+        }
+        if (digits == 0) {
+            return 0.0;
+        }
+        int k = scale + exponent;
+        if (Math.abs(k) >= POWERS_OF_TEN.length) {
+            return viaText(number, exponent);
+        }
+        double magnitude = k >= 0 ? digits * POWERS_OF_TEN[k] : digits / POWERS_OF_TEN[-k];
+        return negative ? -magnitude : magnitude;
+    }
+
+    private static double viaText(String number, int exponent) {
+        double v = new BigDecimal(number).scaleByPowerOfTen(exponent).doubleValue();
+        return v == 0 ? 0.0 : v;
+    }
+
+    /**
+     * The {@code e} for which {@code x} is the double written {@code 1e<e>} (|e| ≤ 22), if any: the
+     * factors by which a decimal unit ({@code mm}, {@code kN/m}) shifts the decimal point.
+     */
+    public static OptionalInt powerOfTen(double x) {
+        for (int i = 0; i < POWERS_OF_TEN.length; i++) {
+            if (x == POWERS_OF_TEN[i]) {
+                return OptionalInt.of(i);
+            }
+            if (x == NEGATIVE_POWERS_OF_TEN[i]) {
+                return OptionalInt.of(-i);
+            }
+        }
+        return OptionalInt.empty();
     }
 
     /** The rounding when double arithmetic settles it; null when only the exact value can. */

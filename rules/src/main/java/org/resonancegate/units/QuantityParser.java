@@ -25,7 +25,8 @@ public final class QuantityParser {
      */
     public static UnitParse parse(String written, Dimension expected, String key) {
         // The SI style puts a (narrow) no-break space between number and unit; editors paste those too.
-        String text = written.replace('\u00A0', ' ').replace('\u202F', ' ').replace('\u2009', ' ');
+        String text = hasOddSpace(written)
+                ? written.replace('\u00A0', ' ').replace('\u202F', ' ').replace('\u2009', ' ') : written;
         // every value of every spec passes here: a hand-written scan instead of a regex, and the
         // words of a message are put together only when there is one
         String what = UnitTable.describe(expected);
@@ -87,6 +88,16 @@ public final class QuantityParser {
         Optional<String> near = Suggestions.closest(unitText, spellings);
         near.ifPresent(s -> message.append(" (did you mean '").append(s).append("'?)"));
         return new UnitParse.Problem(message.toString());
+    }
+
+    private static boolean hasOddSpace(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c == '\u00A0' || c == '\u202F' || c == '\u2009') {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** "a " or "an ", by the first letter of the word that follows. */

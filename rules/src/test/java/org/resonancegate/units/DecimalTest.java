@@ -66,6 +66,28 @@ class DecimalTest {
         }
     }
 
+    /** Decimal text shifted by a power of ten, as BigDecimal shifts it: bit for bit, zero always +0. */
+    @Test
+    void shiftedIsWhatBigDecimalGives() {
+        Random random = new Random(3_1415L);
+        for (int i = 0; i < 300_000; i++) {
+            StringBuilder b = new StringBuilder(random.nextInt(4) == 0 ? "-" : "");
+            b.append(random.nextInt(5) == 0 ? "0" : Long.toString(Math.abs(random.nextLong()) >>> random.nextInt(64)));
+            if (random.nextBoolean()) {
+                b.append('.').append("0".repeat(random.nextInt(4))).append(random.nextInt(1_000_000));
+            }
+            if (random.nextInt(6) == 0) {
+                b.append('e').append(random.nextInt(40) - 20);
+            }
+            String number = b.toString();
+            int exponent = random.nextInt(40) - 20;
+            double reference = new BigDecimal(number).scaleByPowerOfTen(exponent).doubleValue();
+            double expected = reference == 0 ? 0.0 : reference;
+            assertEquals(Double.doubleToLongBits(expected), Double.doubleToLongBits(Decimal.shifted(number, exponent)),
+                    () -> number + " e" + exponent);
+        }
+    }
+
     /** Hand-picked: the ties go the way each mode says (0.125 is exact in binary; 2.675 is just below a half). */
     @Test
     void tiesAndNearTies() {
