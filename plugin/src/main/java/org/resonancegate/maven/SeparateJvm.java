@@ -95,6 +95,8 @@ final class SeparateJvm {
         // the same heap limit as Maven's JVM, so a run that fits there fits here
         command.add("-Xmx" + Math.max(64, Runtime.getRuntime().maxMemory() / (1024 * 1024)) + "m");
         command.addAll(OPTIONS);
+        // the Git reader logs through SLF4J, which Maven's JVM provides; alone, SLF4J would say it found no logger
+        command.add("-Dslf4j.internal.verbosity=ERROR");
         command.add("-cp");
         command.add(classpath.stream().map(Path::toString).collect(Collectors.joining(java.io.File.pathSeparator)));
         command.add(SeparateJvmMain.class.getName());
@@ -113,6 +115,9 @@ final class SeparateJvm {
                         + "; set resonance-gate.jvm=same to check in Maven's own JVM", e);
             }
             process.getOutputStream().close();
+            // a build stopped with Ctrl-C takes its check with it, instead of leaving it to run on
+            Thread stop = new Thread(process::destroy, "resonance-gate separate JVM stop");
+            Runtime.getRuntime().addShutdownHook(stop);
             try (BufferedReader reader = new BufferedReader(new InputStreamReader(process.getInputStream(),
                     StandardCharsets.UTF_8), 1 << 16)) {
                 for (String line = reader.readLine(); line != null; line = reader.readLine()) {
@@ -125,8 +130,17 @@ final class SeparateJvm {
                         default -> out.accept(new ConsoleLine(ConsoleLevel.INFO, line));
                     }
                 }
+                exit = process.waitFor();
+            } finally {
+                if (process.isAlive()) {
+                    process.destroy(); // whatever stopped the reading, the child does not outlive it
+                }
+                try {
+                    Runtime.getRuntime().removeShutdownHook(stop);
+                } catch (IllegalStateException shuttingDown) {
+                    // the JVM is already stopping; the hook runs and finds the child gone
+                }
             }
-            exit = process.waitFor();
         } catch (IOException | RuntimeException e) {
             throw new GateException("resonance-gate: the separate JVM for the check failed: " + e
                     + "; set resonance-gate.jvm=same to check in Maven's own JVM", e);
