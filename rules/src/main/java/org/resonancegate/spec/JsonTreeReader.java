@@ -12,6 +12,8 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
@@ -188,6 +190,10 @@ final class JsonTreeReader {
         if (message == null) {
             return "unreadable input";
         }
+        Optional<String> ours = inOurWords(message);
+        if (ours.isPresent()) {
+            return ours.get();
+        }
         String m = message.replaceAll("\\s*\\(start marker at \\[[^\\]]*\\]\\)", "")
                 .replaceAll("\\[Source: [^;\\]]*;\\s*", "[")
                 .replace("\n", " ")
@@ -207,6 +213,50 @@ final class JsonTreeReader {
             return m + "; the file ends before its closing brackets: check that every { and [ is closed";
         }
         return m + "; check for a missing or extra comma, quote or bracket here";
+    }
+
+    private static final Pattern FOUND = Pattern.compile("Unexpected character \\('(.+?)' \\(code \\d+\\)\\)");
+    private static final Pattern TOKEN = Pattern.compile("Unrecognized token '([^']*)'");
+
+    /** The parser's common complaints, said in the words of someone fixing a file by hand. */
+    private static Optional<String> inOurWords(String message) {
+        Matcher found = FOUND.matcher(message);
+        String what = found.find() ? found.group(1) : "";
+        if (message.startsWith("Unexpected end-of-input")) {
+            return Optional.of(message.contains("closing quote")
+                    ? "the file ends inside a string; close the string with a double quote, then check that every { and [ is closed"
+                    : "the file ends too early; check that every { and [ is closed");
+        }
+        if (what.equals("'")) {
+            return Optional.of("JSON writes keys and strings in double quotes, not single quotes; replace ' with \"");
+        }
+        if (message.contains("comment")) {
+            return Optional.of("JSON has no comments; remove the comment that starts here");
+        }
+        if (what.equals("]") && message.contains("expected a valid value")) {
+            return Optional.of("a comma before a closing ] is not allowed in JSON; remove the comma after the last item");
+        }
+        String shown = what.isEmpty() ? "something else" : "'" + what + "'";
+        if (message.contains("was expecting comma to separate Object entries")) {
+            return Optional.of("a comma is missing between two entries of an object (found " + shown
+                    + " where ',' or '}' belongs); put a comma after the entry before this point");
+        }
+        if (message.contains("was expecting comma to separate Array entries")) {
+            return Optional.of("a comma is missing between two items of a list (found " + shown
+                    + " where ',' or ']' belongs); put a comma after the item before this point");
+        }
+        if (message.contains("was expecting double-quote to start property name")
+                || message.contains("was expecting double-quote to start field name")) {
+            return Optional.of(what.equals("}")
+                    ? "a comma before a closing } is not allowed in JSON; remove the comma after the last entry"
+                    : "a key in double quotes belongs here (found " + shown + "); write keys as \"name\": value");
+        }
+        Matcher token = TOKEN.matcher(message);
+        if (token.find()) {
+            return Optional.of("'" + token.group(1) + "' is not a JSON value; write text in double quotes (\""
+                    + token.group(1) + "\"), while numbers, true, false and null stand without quotes");
+        }
+        return Optional.empty();
     }
 
     private SourceLocation at(TokenStreamLocation location) {

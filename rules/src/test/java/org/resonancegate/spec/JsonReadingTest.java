@@ -26,14 +26,28 @@ class JsonReadingTest {
         String text = "{\n  \"format\": \"resonance-gate/1\",\n  \"id\": \"P-101\"";
         LoadedSpec loaded = load(text);
         // Line 3 is `  "id": "P-101"` (15 characters): the input ends at column 16.
-        Diagnostic d = TestProject.assertOnlyDiagnostic(loaded, 3, 16, "invalid JSON", "end-of-input", "closed");
+        Diagnostic d = TestProject.assertOnlyDiagnostic(loaded, 3, 16, "invalid JSON", "ends too early", "closed");
         assertEquals("src/vibration/p.json", d.location().file());
     }
 
     @Test
     void invalidCharacterIsReportedAtIt() {
         String text = "{\n  \"format\": \"resonance-gate/1\",\n  \"id\": 'P-101'\n}";
-        TestProject.assertOnlyDiagnostic(load(text), 3, 9, "invalid JSON", "Unexpected character");
+        TestProject.assertOnlyDiagnostic(load(text), 3, 9, "invalid JSON", "double quotes, not single quotes");
+    }
+
+    /** The slips people make in JSON by hand, each said in words that name the fix, at the place it is. */
+    @Test
+    void commonSlipsAreNamed() {
+        TestProject.assertOnlyDiagnostic(load("{\n  \"format\": \"resonance-gate/1\",\n}"), 3, 1,
+                "comma before a closing } is not allowed");
+        TestProject.assertOnlyDiagnostic(load("{\n  \"format\": \"resonance-gate/1\",\n  \"x\": [1, 2,]\n}"), 3, 14,
+                "comma before a closing ] is not allowed");
+        TestProject.assertOnlyDiagnostic(load("{\n  \"format\": \"resonance-gate/1\",\n  \"x\": [1 2]\n}"), 3, 11,
+                "comma is missing between two items of a list", "found '2'");
+        TestProject.assertOnlyDiagnostic(load("{\n  \"format\": resonance\n}"), 2, 13,
+                "'resonance' is not a JSON value", "\"resonance\"");
+        TestProject.assertOnlyDiagnostic(load("{\n  \"id\": \"P-1"), 2, 13, "ends inside a string");
     }
 
     @Test
