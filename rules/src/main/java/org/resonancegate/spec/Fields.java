@@ -34,10 +34,10 @@ final class Fields {
         for (JsonNode.Member member : object.members()) {
             if (!accepted.contains(member.key())) {
                 StringBuilder message = new StringBuilder("unknown key \"" + member.key() + "\" in " + where);
-                Suggestions.closest(member.key(), accepted)
-                        .ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
+                Optional<String> meant = Suggestions.closest(member.key(), accepted);
+                meant.ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
                 message.append("; accepted keys: ").append(String.join(", ", accepted));
-                problems.add(member.keyLocation(), message.toString());
+                problems.unknownKey(member.keyLocation(), object.location(), meant, message.toString());
             }
         }
     }
@@ -47,7 +47,7 @@ final class Fields {
                                        Problems problems) {
         Optional<JsonNode> value = object.get(key);
         if (value.isEmpty()) {
-            problems.add(object.location(), "missing required key \"" + key + "\" in " + where
+            problems.missingKey(object.location(), key, "missing required key \"" + key + "\" in " + where
                     + "; add it, for example " + example);
         }
         return value;

@@ -46,7 +46,14 @@ class BadSpecTest {
     @Test
     void unknownTopLevelKeySuggestsTheNearestAndListsAccepted() {
         edit("\"criteria\": [", "\"critera\": [");
-        expect("\"critera\"", "unknown key \"critera\"", "did you mean \"criteria\"", "accepted keys: format, id,");
+        // one slip, one line: the missing "criteria" is the misspelt key, and the line says so
+        expectOnly("\"critera\"", "unknown key \"critera\"", "did you mean \"criteria\"", "accepted keys: format, id,");
+    }
+
+    @Test
+    void aMissingKeyNotExplainedByATypoIsStillSaid() {
+        edit("\"criteria\": [", "\"checks\": [");
+        expect("\"checks\"", "unknown key \"checks\"");
         expect("{\n", "missing required key \"criteria\"");
         assertEquals(2, loaded.diagnostics().size());
     }
