@@ -3,6 +3,7 @@ package org.resonancegate.spec;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -98,7 +99,12 @@ public final class SpecLoader {
     }
 
     /** Ids are unique in the spec folder: each file sharing an id gets a diagnostic naming the others. */
-    private static List<LoadedSpec> markDuplicateIds(List<Read> reads) {
+    private static List<LoadedSpec> markDuplicateIds(List<Read> unsorted) {
+        List<Read> reads = new ArrayList<>(unsorted);
+        reads.sort(Comparator.comparing(Read::file)); // "listed under the first spec" must mean the same on every run
+        // A fault in a shared profile is listed in full under the first spec that uses it; the
+        // others point there, so one typo in a profile is not repeated for every spec.
+        Map<Diagnostic, String> listedUnder = new HashMap<>();
         Map<String, List<Read>> byId = new LinkedHashMap<>();
         for (Read r : reads) {
             r.id().ifPresent(id -> byId.computeIfAbsent(id, k -> new ArrayList<>()).add(r));
@@ -122,6 +128,7 @@ public final class SpecLoader {
                 diagnostics.add(new Diagnostic(new SourceLocation(r.file(), 1, 1),
                         "internal error: the file gave neither a spec nor a diagnostic; please report it"));
             }
+            diagnostics = pointToEarlierListing(r, diagnostics, listedUnder);
             // The file's own problems first, then its profiles', each in reading order by position.
             List<Diagnostic> distinct = new LinkedHashSet<>(diagnostics).stream()
                     .sorted(Comparator.comparing((Diagnostic d) -> !d.location().file().equals(r.file()))
@@ -132,5 +139,40 @@ public final class SpecLoader {
             out.add(new LoadedSpec(r.file(), r.id(), distinct.isEmpty() ? r.spec() : Optional.empty(), distinct));
         }
         return out;
+    }
+
+    /**
+     * {@code diagnostics} with those in profile files already listed under an earlier spec
+     * replaced by one line per profile file, at the top of this spec, naming where they are listed.
+     */
+    private static List<Diagnostic> pointToEarlierListing(Read r, List<Diagnostic> diagnostics,
+                                                          Map<Diagnostic, String> listedUnder) {
+        List<Diagnostic> kept = new ArrayList<>();
+        Map<String, List<String>> elsewhere = new LinkedHashMap<>(); // profile file -> specs listing its faults
+        Map<String, Integer> counts = new LinkedHashMap<>();
+        for (Diagnostic d : diagnostics) {
+            String where = d.location().file();
+            if (where.equals(r.file())) {
+                kept.add(d);
+                continue;
+            }
+            String first = listedUnder.putIfAbsent(d, r.file());
+            if (first == null) {
+                kept.add(d);
+            } else {
+                List<String> under = elsewhere.computeIfAbsent(where, k -> new ArrayList<>());
+                if (!under.contains(first)) {
+                    under.add(first);
+                }
+                counts.merge(where, 1, Integer::sum);
+            }
+        }
+        for (Map.Entry<String, List<String>> e : elsewhere.entrySet()) {
+            int n = counts.get(e.getKey());
+            kept.add(new Diagnostic(new SourceLocation(r.file(), 1, 1), "this spec uses " + e.getKey() + ", which has "
+                    + n + (n == 1 ? " error" : " errors") + ", listed under " + String.join(", ", e.getValue())
+                    + "; fix the profile and this spec is read again"));
+        }
+        return kept;
     }
 }

@@ -119,6 +119,24 @@ class ProfileTest {
     }
 
     @Test
+    void aFaultInASharedProfileIsListedOnceAndTheOtherSpecsPointThere() {
+        String pumps = profile("{\"id\": \"VEL\", \"rule\": \"velocity\", \"mx\": \"4.5 mm/s\"}");
+        project.write("src/profiles/pumps.json", pumps);
+        project.write("src/vibration/a.json", spec(SEP_20, "../profiles/pumps.json").replace("CHW-P-02", "P-A"));
+        project.write("src/vibration/b.json", spec(SEP_20, "../profiles/pumps.json").replace("CHW-P-02", "P-B"));
+        List<LoadedSpec> all = project.loadAll();
+        LoadedSpec a = all.stream().filter(l -> l.file().equals("src/vibration/a.json")).findFirst().orElseThrow();
+        LoadedSpec b = all.stream().filter(l -> l.file().equals("src/vibration/b.json")).findFirst().orElseThrow();
+        SourceLocation typo = TestProject.at("src/profiles/pumps.json", pumps, "\"mx\"");
+        // the first spec in file order lists the fault where it is (one line: the typo names the missing key)
+        TestProject.assertOnlyDiagnostic(a, typo.line(), typo.column(), "unknown key \"mx\"", "did you mean \"max\"");
+        // the next one is an error too, with a line of its own pointing at that listing
+        TestProject.assertOnlyDiagnostic(b, 1, 1, "uses src/profiles/pumps.json", "1 error",
+                "listed under src/vibration/a.json");
+        assertTrue(b.spec().isEmpty());
+    }
+
+    @Test
     void aCycleIsADiagnosticInTheProfileThatCloses() {
         project.write("src/profiles/a.json", profile(ISO_A, "b.json"));
         String b = profile(VEL_45, "a.json");
