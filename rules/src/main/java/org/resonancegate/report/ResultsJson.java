@@ -2,6 +2,7 @@ package org.resonancegate.report;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
@@ -55,11 +56,16 @@ public final class ResultsJson {
     /** The document as UTF-8 bytes (all ASCII, see the class comment). */
     public static byte[] toBytes(Results results) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
+        writeTo(results, out);
+        return out.toByteArray();
+    }
+
+    /** Streams the document to {@code out} (closed when done), so a large run is never held whole in memory. */
+    static void writeTo(Results results, OutputStream out) {
         try (JsonGenerator g = FACTORY.createGenerator(new Context(), out, JsonEncoding.UTF8)) {
             writeResults(g, results);
+            g.writeRaw('\n');
         }
-        out.write('\n');
-        return out.toByteArray();
     }
 
     /** The document as text. */
@@ -69,7 +75,7 @@ public final class ResultsJson {
 
     /** Writes the document to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
     public static void write(Results results, Path target) throws IOException {
-        AtomicWrite.write(target, toBytes(results));
+        AtomicWrite.write(target, out -> writeTo(results, out));
     }
 
     private static void writeResults(JsonGenerator g, Results results) {

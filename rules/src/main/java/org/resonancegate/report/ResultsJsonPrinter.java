@@ -2,6 +2,8 @@ package org.resonancegate.report;
 
 import tools.jackson.core.JsonGenerator;
 import tools.jackson.core.PrettyPrinter;
+import tools.jackson.core.SerializableString;
+import tools.jackson.core.io.SerializedString;
 
 /**
  * Two-space indentation, {@code "\n"} line ends whatever the platform, {@code "key": value} and
@@ -76,9 +78,22 @@ final class ResultsJsonPrinter implements PrettyPrinter {
     }
 
     private void newline(JsonGenerator g) {
-        g.writeRaw('\n');
-        for (int i = 0; i < depth; i++) {
-            g.writeRaw("  ");
+        g.writeRaw(depth < INDENTS.length ? INDENTS[depth] : indent(depth));
+    }
+
+    /**
+     * A line end and the indentation of each depth, encoded once: the printer writes one per value,
+     * millions in a large run, and one copy of ready bytes is far cheaper than a raw write per level.
+     */
+    private static final SerializableString[] INDENTS = new SerializableString[24];
+
+    static {
+        for (int i = 0; i < INDENTS.length; i++) {
+            INDENTS[i] = indent(i);
         }
+    }
+
+    private static SerializableString indent(int depth) {
+        return new SerializedString("\n" + "  ".repeat(depth));
     }
 }

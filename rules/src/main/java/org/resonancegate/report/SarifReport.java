@@ -2,6 +2,7 @@ package org.resonancegate.report;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -10,6 +11,8 @@ import java.util.SortedMap;
 import java.util.TreeMap;
 import org.resonancegate.spec.Rule;
 import org.resonancegate.spec.Severity;
+import tools.jackson.core.JsonGenerator;
+import tools.jackson.databind.ObjectWriter;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
@@ -73,14 +76,23 @@ public final class SarifReport {
      */
     public static byte[] toBytes(Results results, Optional<String> projectInRepository) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        MAPPER.writer().with(new ResultsJsonPrinter()).writeValue(out, log(results, projectInRepository));
-        out.write('\n');
+        writeTo(results, projectInRepository, out);
         return out.toByteArray();
     }
 
     /** Writes the log to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
     public static void write(Results results, Path target, Optional<String> projectInRepository) throws IOException {
-        AtomicWrite.write(target, toBytes(results, projectInRepository));
+        AtomicWrite.write(target, out -> writeTo(results, projectInRepository, out));
+    }
+
+    /** Streams the log to {@code out} (closed when done) rather than holding its bytes whole first. */
+    private static void writeTo(Results results, Optional<String> projectInRepository, OutputStream out) {
+        SarifLog log = log(results, projectInRepository);
+        ObjectWriter writer = MAPPER.writer().with(new ResultsJsonPrinter());
+        try (JsonGenerator g = writer.createGenerator(out)) {
+            writer.writeValue(g, log);
+            g.writeRaw('\n');
+        }
     }
 
     static SarifLog log(Results results, Optional<String> projectInRepository) {
@@ -131,8 +143,7 @@ public final class SarifReport {
             return Optional.empty();
         }
         if (row.check().isEmpty()) {
-            boolean before = comparison.get().specs().stream()
-                    .filter(s -> s.currentFile().filter(row.spec().file()::equals).isPresent())
+            boolean before = comparison.get().current(row.spec().file()).stream()
                     .flatMap(s -> s.baselineErrors().stream())
                     .anyMatch(e -> e.message().equals(row.message()));
             return Optional.of(before ? "unchanged" : "new");
