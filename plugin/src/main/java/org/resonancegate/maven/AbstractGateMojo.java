@@ -6,9 +6,16 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.ThreadFactory;
 import java.util.stream.Collectors;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -36,6 +43,13 @@ public abstract class AbstractGateMojo extends AbstractMojo {
 
     /** Summary copies from modules built in parallel go one at a time, so none is lost. */
     private static final Object SUMMARY_LOCK = new Object();
+
+    /** Report writers run on daemon threads, so a stuck disk cannot keep Maven's JVM alive. */
+    private static final ThreadFactory REPORT_THREADS = task -> {
+        Thread thread = new Thread(task, "resonance-gate-report");
+        thread.setDaemon(true);
+        return thread;
+    };
 
     /** The project's base directory: report paths are relative to it, and profiles may not leave it. */
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
@@ -181,17 +195,47 @@ public abstract class AbstractGateMojo extends AbstractMojo {
                 ? "the files in " + display(base, specs) + " are all profiles, none is a spec" : "");
     }
 
-    /** @return the file a person should open first */
+    /**
+     * Writes the chosen files side by side, one writer per thread on a pool no larger than the
+     * machine's cores: each only reads the same immutable {@link Results}, and each goes to its own
+     * file atomically. A failure names its file as before; when several fail, the first in
+     * writing order is reported, after every writer has finished, so no thread is left behind.
+     *
+     * @return the file a person should open first
+     */
     private static Path writeReports(Path base, Path output, Results results, Set<ReportFormat> chosen)
             throws MojoExecutionException {
         Optional<String> inRepository = folderInWorkTree(base);
-        for (ReportFormat format : chosen) {
-            try {
-                format.write(results, output, chosen, inRepository);
-            } catch (IOException | RuntimeException e) {
-                throw new MojoExecutionException("resonance-gate: cannot write "
-                        + display(base, output.resolve(format.fileName())) + ": " + e, e);
+        int threads = Math.max(1, Math.min(chosen.size(), Runtime.getRuntime().availableProcessors()));
+        ExecutorService pool = Executors.newFixedThreadPool(threads, REPORT_THREADS);
+        try {
+            Map<ReportFormat, Future<Path>> running = new LinkedHashMap<>();
+            for (ReportFormat format : chosen) {
+                running.put(format, pool.submit(() -> format.write(results, output, chosen, inRepository)));
             }
+            MojoExecutionException first = null;
+            for (Map.Entry<ReportFormat, Future<Path>> writing : running.entrySet()) {
+                try {
+                    writing.getValue().get();
+                } catch (ExecutionException e) {
+                    Throwable cause = e.getCause();
+                    if (cause instanceof Error error) {
+                        throw error;
+                    }
+                    if (first == null) {
+                        first = new MojoExecutionException("resonance-gate: cannot write "
+                                + display(base, output.resolve(writing.getKey().fileName())) + ": " + cause, cause);
+                    }
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new MojoExecutionException("resonance-gate: interrupted while writing the reports", e);
+                }
+            }
+            if (first != null) {
+                throw first;
+            }
+        } finally {
+            pool.shutdownNow();
         }
         return output.resolve(ReportFormat.forReaders(chosen).orElseThrow().fileName());
     }
