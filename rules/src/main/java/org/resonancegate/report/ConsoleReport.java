@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.StringJoiner;
 
 /**
@@ -84,11 +85,22 @@ public final class ConsoleReport {
         }
     }
 
+    /**
+     * The table of specs. A large run lists only the specs {@link DetailedSpecs} picks (those that
+     * need a look first), then a line saying how many are left out: ten thousand rows would push
+     * the findings out of any terminal, and every row left out is a spec the count line totals and
+     * the findings below (one line per failing criterion) already name when it broke.
+     */
     private static List<String> table(Results results) {
         List<String[]> rows = new ArrayList<>();
         rows.add(HEADINGS);
         long[] n = new long[CheckStatus.values().length];
-        for (SpecResult spec : results.specs()) {
+        List<SpecResult> specs = results.specs();
+        Set<String> shown = specs.size() > DetailedSpecs.LIMIT ? DetailedSpecs.files(specs) : Set.of();
+        for (SpecResult spec : specs) {
+            if (!shown.isEmpty() && !shown.contains(spec.file())) {
+                continue;
+            }
             Arrays.fill(n, 0);
             for (CheckResult c : spec.checks()) {
                 n[c.status().ordinal()]++;
@@ -127,6 +139,10 @@ public final class ConsoleReport {
                 }
             }
             out.add(line.toString().stripTrailing());
+        }
+        if (!shown.isEmpty()) {
+            out.add("(" + (rows.size() - 1) + " of " + specs.size() + " specs listed: errors, failures, waivers and"
+                    + " warnings first; the findings below and the count line cover every spec)");
         }
         return out;
     }
