@@ -11,9 +11,11 @@ import java.util.SortedMap;
 import java.util.TreeMap;
 import org.resonancegate.spec.Rule;
 import org.resonancegate.spec.Severity;
+import tools.jackson.core.JsonEncoding;
 import tools.jackson.core.JsonGenerator;
-import tools.jackson.databind.ObjectWriter;
-import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.core.ObjectWriteContext;
+import tools.jackson.core.PrettyPrinter;
+import tools.jackson.core.json.JsonFactory;
 
 /**
  * Writes {@link Results} as a SARIF 2.1.0 log (OASIS Static Analysis Results Interchange Format),
@@ -58,7 +60,8 @@ public final class SarifReport {
     static final String PROJECT_ROOT = "PROJECTROOT";
     static final String SOURCE_ROOT = "SRCROOT";
 
-    private static final JsonMapper MAPPER = JsonMapper.builder().build();
+    /** Jackson's defaults: plain JSON escapes, UTF-8 written as it is (SARIF is UTF-8). */
+    private static final JsonFactory FACTORY = JsonFactory.builder().build();
 
     private SarifReport() {
     }
@@ -88,10 +91,24 @@ public final class SarifReport {
     /** Streams the log to {@code out} (closed when done) rather than holding its bytes whole first. */
     private static void writeTo(Results results, Optional<String> projectInRepository, OutputStream out) {
         SarifLog log = log(results, projectInRepository);
-        ObjectWriter writer = MAPPER.writer().with(new ResultsJsonPrinter());
-        try (JsonGenerator g = writer.createGenerator(out)) {
-            writer.writeValue(g, log);
+        try (JsonGenerator g = FACTORY.createGenerator(new Printed(), out, JsonEncoding.UTF8)) {
+            SarifJson.write(g, log);
             g.writeRaw('\n');
+        }
+    }
+
+    /** The generator's only departure from the defaults: our printer ({@code "\n"}, two spaces). */
+    private static final class Printed extends ObjectWriteContext.Base {
+        private final PrettyPrinter printer = new ResultsJsonPrinter();
+
+        @Override
+        public PrettyPrinter getPrettyPrinter() {
+            return printer;
+        }
+
+        @Override
+        public boolean hasPrettyPrinter() {
+            return true;
         }
     }
 
