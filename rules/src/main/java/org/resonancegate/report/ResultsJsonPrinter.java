@@ -38,8 +38,7 @@ final class ResultsJsonPrinter implements PrettyPrinter {
 
     @Override
     public void writeObjectEntrySeparator(JsonGenerator g) {
-        g.writeRaw(',');
-        newline(g);
+        separator(g);
     }
 
     @Override
@@ -64,8 +63,7 @@ final class ResultsJsonPrinter implements PrettyPrinter {
 
     @Override
     public void writeArrayValueSeparator(JsonGenerator g) {
-        g.writeRaw(',');
-        newline(g);
+        separator(g);
     }
 
     @Override
@@ -78,22 +76,30 @@ final class ResultsJsonPrinter implements PrettyPrinter {
     }
 
     private void newline(JsonGenerator g) {
-        g.writeRaw(depth < INDENTS.length ? INDENTS[depth] : indent(depth));
+        g.writeRaw(depth < INDENTS.length ? INDENTS[depth] : indent("", depth));
+    }
+
+    /** A comma, the line end and the indentation, in one write. */
+    private void separator(JsonGenerator g) {
+        g.writeRaw(depth < SEPARATORS.length ? SEPARATORS[depth] : indent(",", depth));
     }
 
     /**
-     * A line end and the indentation of each depth, encoded once: the printer writes one per value,
-     * millions in a large run, and one copy of ready bytes is far cheaper than a raw write per level.
+     * A line end and the indentation of each depth (with and without the comma before it),
+     * encoded once: the printer writes one per value, millions in a large run, and one copy of
+     * ready bytes is far cheaper than a raw write per level.
      */
     private static final SerializableString[] INDENTS = new SerializableString[24];
+    private static final SerializableString[] SEPARATORS = new SerializableString[INDENTS.length];
 
     static {
         for (int i = 0; i < INDENTS.length; i++) {
-            INDENTS[i] = indent(i);
+            INDENTS[i] = indent("", i);
+            SEPARATORS[i] = indent(",", i);
         }
     }
 
-    private static SerializableString indent(int depth) {
-        return new SerializedString("\n" + "  ".repeat(depth));
+    private static SerializableString indent(String before, int depth) {
+        return new SerializedString(before + "\n" + "  ".repeat(depth));
     }
 }
