@@ -11,8 +11,6 @@ import java.util.OptionalDouble;
 import org.resonancegate.spec.SourceLocation;
 import tools.jackson.core.JsonEncoding;
 import tools.jackson.core.JsonGenerator;
-import tools.jackson.core.ObjectWriteContext;
-import tools.jackson.core.PrettyPrinter;
 import tools.jackson.core.SerializableString;
 import tools.jackson.core.StreamWriteFeature;
 import tools.jackson.core.io.CharacterEscapes;
@@ -63,7 +61,7 @@ public final class ResultsJson {
 
     /** Streams the document to {@code out} (closed when done), so a large run is never held whole in memory. */
     static void writeTo(Results results, OutputStream out) {
-        try (JsonGenerator g = FACTORY.createGenerator(new Context(), out, JsonEncoding.UTF8)) {
+        try (JsonGenerator g = FACTORY.createGenerator(new ResultsJsonPrinter.Context(ESCAPES), out, JsonEncoding.UTF8)) {
             writeResults(g, results);
             g.writeRaw('\n');
         }
@@ -203,26 +201,6 @@ public final class ResultsJson {
             g.writeNumber((long) value); // also folds -0.0 into 0
         } else {
             g.writeNumber(value);
-        }
-    }
-
-    /** Supplies our own printer for each document; nothing else differs from the defaults. */
-    private static final class Context extends ObjectWriteContext.Base {
-        private final PrettyPrinter printer = new ResultsJsonPrinter();
-
-        @Override
-        public PrettyPrinter getPrettyPrinter() {
-            return printer;
-        }
-
-        @Override
-        public boolean hasPrettyPrinter() {
-            return true;
-        }
-
-        @Override
-        public CharacterEscapes getCharacterEscapes() {
-            return ESCAPES;
         }
     }
 

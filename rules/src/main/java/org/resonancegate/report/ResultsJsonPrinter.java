@@ -1,8 +1,10 @@
 package org.resonancegate.report;
 
 import tools.jackson.core.JsonGenerator;
+import tools.jackson.core.ObjectWriteContext;
 import tools.jackson.core.PrettyPrinter;
 import tools.jackson.core.SerializableString;
+import tools.jackson.core.io.CharacterEscapes;
 import tools.jackson.core.io.SerializedString;
 
 /**
@@ -101,5 +103,34 @@ final class ResultsJsonPrinter implements PrettyPrinter {
 
     private static SerializableString indent(String before, int depth) {
         return new SerializedString(before + "\n" + "  ".repeat(depth));
+    }
+
+    /**
+     * What a generator asks for its document: a fresh printer of ours (it counts nesting), and
+     * the character escapes, {@code null} for Jackson's standard ones; nothing else differs from
+     * the defaults.
+     */
+    static final class Context extends ObjectWriteContext.Base {
+        private final PrettyPrinter printer = new ResultsJsonPrinter();
+        private final CharacterEscapes escapes;
+
+        Context(CharacterEscapes escapes) {
+            this.escapes = escapes;
+        }
+
+        @Override
+        public PrettyPrinter getPrettyPrinter() {
+            return printer;
+        }
+
+        @Override
+        public boolean hasPrettyPrinter() {
+            return true;
+        }
+
+        @Override
+        public CharacterEscapes getCharacterEscapes() {
+            return escapes;
+        }
     }
 }

@@ -13,8 +13,6 @@ import org.resonancegate.spec.Rule;
 import org.resonancegate.spec.Severity;
 import tools.jackson.core.JsonEncoding;
 import tools.jackson.core.JsonGenerator;
-import tools.jackson.core.ObjectWriteContext;
-import tools.jackson.core.PrettyPrinter;
 import tools.jackson.core.json.JsonFactory;
 
 /**
@@ -91,24 +89,9 @@ public final class SarifReport {
     /** Streams the log to {@code out} (closed when done) rather than holding its bytes whole first. */
     private static void writeTo(Results results, Optional<String> projectInRepository, OutputStream out) {
         SarifLog log = log(results, projectInRepository);
-        try (JsonGenerator g = FACTORY.createGenerator(new Printed(), out, JsonEncoding.UTF8)) {
+        try (JsonGenerator g = FACTORY.createGenerator(new ResultsJsonPrinter.Context(null), out, JsonEncoding.UTF8)) {
             SarifJson.write(g, log);
             g.writeRaw('\n');
-        }
-    }
-
-    /** The generator's only departure from the defaults: our printer ({@code "\n"}, two spaces). */
-    private static final class Printed extends ObjectWriteContext.Base {
-        private final PrettyPrinter printer = new ResultsJsonPrinter();
-
-        @Override
-        public PrettyPrinter getPrettyPrinter() {
-            return printer;
-        }
-
-        @Override
-        public boolean hasPrettyPrinter() {
-            return true;
         }
     }
 
