@@ -5,9 +5,16 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.ThreadFactory;
 import java.util.function.Consumer;
 import java.util.stream.Collectors;
 import org.resonancegate.check.CheckRequest;
@@ -31,6 +38,13 @@ final class GateRun {
 
     /** Summary copies from modules built in parallel go one at a time, so none is lost. */
     private static final Object SUMMARY_LOCK = new Object();
+
+    /** Report writers run on daemon threads, so a stuck disk cannot keep Maven's JVM alive. */
+    private static final ThreadFactory REPORT_THREADS = task -> {
+        Thread thread = new Thread(task, "resonance-gate-report");
+        thread.setDaemon(true);
+        return thread;
+    };
 
     /**
      * @param verdict what the run means for the build
@@ -143,17 +157,47 @@ final class GateRun {
                 ? "the files in " + display(base, specs) + " are all profiles, none is a spec" : "");
     }
 
-    /** @return the file a person should open first */
+    /**
+     * Writes the chosen files side by side, one writer per thread on a pool no larger than the
+     * machine's cores: each only reads the same immutable {@link Results}, and each goes to its own
+     * file atomically. A failure names its file as before; when several fail, the first in
+     * writing order is reported, after every writer has finished, so no thread is left behind.
+     *
+     * @return the file a person should open first
+     */
     private static Path writeReports(Path base, Path output, Results results, Set<ReportFormat> chosen)
             throws GateException {
         Optional<String> inRepository = folderInWorkTree(base);
-        for (ReportFormat format : chosen) {
-            try {
-                format.write(results, output, chosen, inRepository);
-            } catch (IOException | RuntimeException e) {
-                throw new GateException("resonance-gate: cannot write "
-                        + display(base, output.resolve(format.fileName())) + ": " + e, e);
+        int threads = Math.max(1, Math.min(chosen.size(), Runtime.getRuntime().availableProcessors()));
+        ExecutorService pool = Executors.newFixedThreadPool(threads, REPORT_THREADS);
+        try {
+            Map<ReportFormat, Future<Path>> running = new LinkedHashMap<>();
+            for (ReportFormat format : chosen) {
+                running.put(format, pool.submit(() -> format.write(results, output, chosen, inRepository)));
             }
+            GateException first = null;
+            for (Map.Entry<ReportFormat, Future<Path>> writing : running.entrySet()) {
+                try {
+                    writing.getValue().get();
+                } catch (ExecutionException e) {
+                    Throwable cause = e.getCause();
+                    if (cause instanceof Error error) {
+                        throw error;
+                    }
+                    if (first == null) {
+                        first = new GateException("resonance-gate: cannot write "
+                                + display(base, output.resolve(writing.getKey().fileName())) + ": " + cause, cause);
+                    }
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new GateException("resonance-gate: interrupted while writing the reports", e);
+                }
+            }
+            if (first != null) {
+                throw first;
+            }
+        } finally {
+            pool.shutdownNow();
         }
         return output.resolve(ReportFormat.forReaders(chosen).orElseThrow().fileName());
     }

@@ -1,6 +1,8 @@
 package org.resonancegate.report;
 
+import java.io.BufferedOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -16,13 +18,29 @@ public final class AtomicWrite {
     private AtomicWrite() {
     }
 
+    /** What writes a file's bytes; the stream is buffered, and closed by {@link AtomicWrite}. */
+    @FunctionalInterface
+    public interface Body {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
     /** Writes {@code bytes} to {@code target}, creating its directory, replacing any file there. */
     public static void write(Path target, byte[] bytes) throws IOException {
+        write(target, out -> out.write(bytes));
+    }
+
+    /**
+     * Streams {@code body} to {@code target}, creating its directory, replacing any file there. A
+     * large report goes to the disk as it is made instead of being held whole in memory first.
+     */
+    public static void write(Path target, Body body) throws IOException {
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
         Path temp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
         try {
-            Files.write(temp, bytes);
+            try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(temp), 1 << 16)) {
+                body.writeTo(out);
+            }
             readableLikeAnyFile(temp);
             try {
                 Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);

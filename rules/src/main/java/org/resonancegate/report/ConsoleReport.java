@@ -1,8 +1,10 @@
 package org.resonancegate.report;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.StringJoiner;
 
 /**
@@ -15,6 +17,9 @@ public final class ConsoleReport {
     /** Printed after every run: what the numbers are, and what they are not. */
     public static final String CAUTION = "Caution: a screening aid on linear models. Final designs need a qualified "
             + "engineer, commissioning measurements and the applicable local codes and standards.";
+
+    /** Padding for the table's columns, appended in one piece rather than made anew per cell. */
+    private static final String SPACES = " ".repeat(64);
 
     private static final String[] HEADINGS = {"file", "id", "status", "pass", "fail", "waived", "warning", "errors"};
 
@@ -80,13 +85,30 @@ public final class ConsoleReport {
         }
     }
 
+    /**
+     * The table of specs. A large run lists only the specs {@link DetailedSpecs} picks (those that
+     * need a look first), then a line saying how many are left out: ten thousand rows would push
+     * the findings out of any terminal, and every row left out is a spec the count line totals and
+     * the findings below (one line per failing criterion) already name when it broke.
+     */
     private static List<String> table(Results results) {
         List<String[]> rows = new ArrayList<>();
         rows.add(HEADINGS);
-        for (SpecResult spec : results.specs()) {
+        long[] n = new long[CheckStatus.values().length];
+        List<SpecResult> specs = results.specs();
+        Set<String> shown = specs.size() > DetailedSpecs.LIMIT ? DetailedSpecs.files(specs) : Set.of();
+        for (SpecResult spec : specs) {
+            if (!shown.isEmpty() && !shown.contains(spec.file())) {
+                continue;
+            }
+            Arrays.fill(n, 0);
+            for (CheckResult c : spec.checks()) {
+                n[c.status().ordinal()]++;
+            }
             rows.add(new String[] {spec.file(), spec.id().orElse("-"), spec.status().key(),
-                count(spec, CheckStatus.PASS), count(spec, CheckStatus.FAIL), count(spec, CheckStatus.WAIVED),
-                count(spec, CheckStatus.WARNING), Integer.toString(spec.errors().size())});
+                Long.toString(n[CheckStatus.PASS.ordinal()]), Long.toString(n[CheckStatus.FAIL.ordinal()]),
+                Long.toString(n[CheckStatus.WAIVED.ordinal()]), Long.toString(n[CheckStatus.WARNING.ordinal()]),
+                Integer.toString(spec.errors().size())});
         }
         int[] widths = new int[HEADINGS.length];
         for (String[] row : rows) {
@@ -95,24 +117,34 @@ public final class ConsoleReport {
             }
         }
         List<String> out = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
         for (String[] row : rows) {
-            StringBuilder line = new StringBuilder();
+            line.setLength(0);
             for (int i = 0; i < row.length; i++) {
                 boolean numeric = i >= 3; // counts align right, text left
                 String cell = row[i];
-                String pad = " ".repeat(widths[i] - cell.codePointCount(0, cell.length()));
-                line.append(numeric ? pad + cell : cell + pad);
+                int pad = widths[i] - cell.codePointCount(0, cell.length());
+                if (!numeric) {
+                    line.append(cell);
+                }
+                line.append(SPACES, 0, Math.min(pad, SPACES.length()));
+                for (int k = SPACES.length(); k < pad; k++) {
+                    line.append(' ');
+                }
+                if (numeric) {
+                    line.append(cell);
+                }
                 if (i < row.length - 1) {
                     line.append("  ");
                 }
             }
             out.add(line.toString().stripTrailing());
         }
+        if (!shown.isEmpty()) {
+            out.add("(" + (rows.size() - 1) + " of " + specs.size() + " specs listed: errors, failures, waivers and"
+                    + " warnings first; the findings below and the count line cover every spec)");
+        }
         return out;
-    }
-
-    private static String count(SpecResult spec, CheckStatus status) {
-        return Long.toString(spec.checks().stream().filter(c -> c.status() == status).count());
     }
 
     /** The one-line count of specs and criteria by status, shared with the other short reports. */

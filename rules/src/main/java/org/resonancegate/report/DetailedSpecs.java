@@ -1,6 +1,8 @@
 package org.resonancegate.report;
 
+import java.util.Arrays;
 import java.util.Comparator;
+import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -27,12 +29,25 @@ public final class DetailedSpecs {
             specs.forEach(s -> all.add(s.file()));
             return all;
         }
-        Set<String> chosen = new LinkedHashSet<>();
-        specs.stream().sorted(Comparator.comparingInt(DetailedSpecs::urgency).thenComparing(SpecResult::file))
-                .limit(LIMIT).forEach(s -> chosen.add(s.file()));
+        // each spec's urgency worked out once, not again in every comparison of the sort
+        int[] urgency = new int[specs.size()];
+        Integer[] order = new Integer[specs.size()];
+        for (int i = 0; i < urgency.length; i++) {
+            urgency[i] = urgency(specs.get(i));
+            order[i] = i;
+        }
+        Arrays.sort(order, Comparator.<Integer>comparingInt(i -> urgency[i]).thenComparing(i -> specs.get(i).file()));
+        Set<String> chosen = new HashSet<>();
+        for (int i = 0; i < LIMIT; i++) {
+            chosen.add(specs.get(order[i]).file());
+        }
         // in the order given (results are in file order), whatever the order of choosing
         Set<String> ordered = new LinkedHashSet<>();
-        specs.stream().map(SpecResult::file).filter(chosen::contains).forEach(ordered::add);
+        for (SpecResult spec : specs) {
+            if (chosen.contains(spec.file())) {
+                ordered.add(spec.file());
+            }
+        }
         return ordered;
     }
 
@@ -41,7 +56,16 @@ public final class DetailedSpecs {
             case ERROR -> 0;
             case FAIL -> 1;
             case WAIVED -> 2;
-            case PASS -> spec.checks().stream().anyMatch(c -> c.status() == CheckStatus.WARNING) ? 3 : 4;
+            case PASS -> warns(spec) ? 3 : 4;
         };
+    }
+
+    private static boolean warns(SpecResult spec) {
+        for (CheckResult c : spec.checks()) {
+            if (c.status() == CheckStatus.WARNING) {
+                return true;
+            }
+        }
+        return false;
     }
 }

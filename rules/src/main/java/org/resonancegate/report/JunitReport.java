@@ -1,7 +1,13 @@
 package org.resonancegate.report;
 
+import java.io.BufferedWriter;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import javax.xml.stream.XMLOutputFactory;
 import javax.xml.stream.XMLStreamException;
@@ -46,7 +52,27 @@ public final class JunitReport {
     public static byte[] toBytes(Results results) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         try {
-            XMLStreamWriter x = FACTORY.createXMLStreamWriter(out, "UTF-8");
+            writeTo(results, out);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e); // a byte array does not fail
+        }
+        return out.toByteArray();
+    }
+
+    /** Writes the report to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
+    public static void write(Results results, Path target) throws IOException {
+        AtomicWrite.write(target, out -> writeTo(results, out));
+    }
+
+    /**
+     * Streams the report to {@code out}, encoded by a buffered UTF-8 writer: given a byte stream
+     * the JDK's XML writer encodes itself, one {@code write} call per byte. Every character here
+     * can be encoded (the text was made legal first), so the bytes are the same either way.
+     */
+    private static void writeTo(Results results, OutputStream target) throws IOException {
+        Writer out = new BufferedWriter(new OutputStreamWriter(target, StandardCharsets.UTF_8), 1 << 14);
+        try {
+            XMLStreamWriter x = FACTORY.createXMLStreamWriter(out);
             x.writeStartDocument("UTF-8", "1.0");
             x.writeCharacters("\n");
             x.writeComment(" " + ConsoleReport.CAUTION + " ");
@@ -63,15 +89,13 @@ public final class JunitReport {
             x.writeEndDocument();
             x.close();
         } catch (XMLStreamException e) {
+            if (e.getNestedException() instanceof IOException io) {
+                throw io;
+            }
             // only a fault in this class can reach here: the text was made legal before writing
             throw new IllegalStateException("cannot write the JUnit XML report: " + e.getMessage(), e);
         }
-        return out.toByteArray();
-    }
-
-    /** Writes the report to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
-    public static void write(Results results, Path target) throws IOException {
-        AtomicWrite.write(target, toBytes(results));
+        out.flush();
     }
 
     private static void suite(XMLStreamWriter x, SpecResult spec, Results results) throws XMLStreamException {

@@ -16,8 +16,10 @@ import org.resonancegate.units.Suggestions;
 
 /**
  * The files a run can write, each drawn from the same {@link Results}: the name a user picks it
- * by, the file name in the output directory, and how it is written. Writing order is declaration
- * order, so {@code results.json} (the record the others are drawn from) comes first.
+ * by, the file name in the output directory, and how it is written. Each writer only reads the
+ * results (immutable throughout) and writes its own file, so a front end may run them side by
+ * side; declaration order, {@code results.json} (the record the others are drawn from) first, is
+ * the order a front end names failures in.
  */
 public enum ReportFormat {
     JSON("json", ResultsJson.FILE_NAME, 3, (results, file, chosen, place) -> ResultsJson.write(results, file)),

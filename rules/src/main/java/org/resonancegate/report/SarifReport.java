@@ -2,6 +2,7 @@ package org.resonancegate.report;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -10,7 +11,9 @@ import java.util.SortedMap;
 import java.util.TreeMap;
 import org.resonancegate.spec.Rule;
 import org.resonancegate.spec.Severity;
-import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.core.JsonEncoding;
+import tools.jackson.core.JsonGenerator;
+import tools.jackson.core.json.JsonFactory;
 
 /**
  * Writes {@link Results} as a SARIF 2.1.0 log (OASIS Static Analysis Results Interchange Format),
@@ -55,7 +58,8 @@ public final class SarifReport {
     static final String PROJECT_ROOT = "PROJECTROOT";
     static final String SOURCE_ROOT = "SRCROOT";
 
-    private static final JsonMapper MAPPER = JsonMapper.builder().build();
+    /** Jackson's defaults: plain JSON escapes, UTF-8 written as it is (SARIF is UTF-8). */
+    private static final JsonFactory FACTORY = JsonFactory.builder().build();
 
     private SarifReport() {
     }
@@ -73,14 +77,22 @@ public final class SarifReport {
      */
     public static byte[] toBytes(Results results, Optional<String> projectInRepository) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        MAPPER.writer().with(new ResultsJsonPrinter()).writeValue(out, log(results, projectInRepository));
-        out.write('\n');
+        writeTo(results, projectInRepository, out);
         return out.toByteArray();
     }
 
     /** Writes the log to {@code target}, creating its directory; atomic ({@link AtomicWrite}). */
     public static void write(Results results, Path target, Optional<String> projectInRepository) throws IOException {
-        AtomicWrite.write(target, toBytes(results, projectInRepository));
+        AtomicWrite.write(target, out -> writeTo(results, projectInRepository, out));
+    }
+
+    /** Streams the log to {@code out} (closed when done) rather than holding its bytes whole first. */
+    private static void writeTo(Results results, Optional<String> projectInRepository, OutputStream out) {
+        SarifLog log = log(results, projectInRepository);
+        try (JsonGenerator g = FACTORY.createGenerator(new ResultsJsonPrinter.Context(null), out, JsonEncoding.UTF8)) {
+            SarifJson.write(g, log);
+            g.writeRaw('\n');
+        }
     }
 
     static SarifLog log(Results results, Optional<String> projectInRepository) {
@@ -131,8 +143,7 @@ public final class SarifReport {
             return Optional.empty();
         }
         if (row.check().isEmpty()) {
-            boolean before = comparison.get().specs().stream()
-                    .filter(s -> s.currentFile().filter(row.spec().file()::equals).isPresent())
+            boolean before = comparison.get().current(row.spec().file()).stream()
                     .flatMap(s -> s.baselineErrors().stream())
                     .anyMatch(e -> e.message().equals(row.message()));
             return Optional.of(before ? "unchanged" : "new");

@@ -1,8 +1,11 @@
 package org.resonancegate.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
@@ -100,5 +103,34 @@ class ConsoleReportTest {
         // wording fixed by the project owner's brief
         assertEquals("Caution: a screening aid on linear models. Final designs need a qualified engineer,"
                 + " commissioning measurements and the applicable local codes and standards.", ConsoleReport.CAUTION);
+    }
+
+    /** A large run: the table lists the specs to look at first, and every failing criterion keeps its line. */
+    @Test
+    void aLargeRunListsTheUrgentSpecsAndEveryFinding() {
+        List<SpecResult> specs = new ArrayList<>();
+        for (int i = 0; i < 250; i++) {
+            String file = String.format(Locale.ROOT, "src/vibration/s%03d.json", i);
+            boolean fails = i % 50 == 7; // 5 failing specs among 245 passing ones
+            CheckResult check = Fixtures.check("SEP", "separation", fails ? CheckStatus.FAIL : CheckStatus.PASS,
+                    "mode 1 near 1x", 9);
+            specs.add(new SpecResult(file, Optional.of("S-" + i), fails ? SpecStatus.FAIL : SpecStatus.PASS,
+                    List.of(), List.of(check), List.of()));
+        }
+        List<ConsoleLine> lines = ConsoleReport.lines(new Results(specs));
+        List<String> rows = lines.stream().map(ConsoleLine::text).filter(t -> t.startsWith("src/vibration/s")
+                && !t.contains(":9:")).toList();
+        assertEquals(DetailedSpecs.LIMIT, rows.size());
+        // the failing specs come first, then passes in file order up to the limit
+        for (int i = 0; i < 250; i += 50) {
+            String failing = String.format(Locale.ROOT, "src/vibration/s%03d.json", i + 7);
+            assertTrue(rows.stream().anyMatch(r -> r.startsWith(failing + " ")), failing);
+        }
+        assertTrue(rows.stream().noneMatch(r -> r.startsWith("src/vibration/s249.json")));
+        assertTrue(lines.stream().anyMatch(l -> l.text().equals("(100 of 250 specs listed:"
+                + " errors, failures, waivers and warnings first; the findings below and the count line cover every spec)")));
+        // every failure still has its own located line
+        assertEquals(5, lines.stream().filter(l -> l.level() == ConsoleLevel.ERROR && l.text().contains(".json:9:")).count());
+        assertEquals(error("250 specs: 245 pass, 5 fail, 0 error; 5 criteria failed"), lines.get(lines.size() - 2));
     }
 }

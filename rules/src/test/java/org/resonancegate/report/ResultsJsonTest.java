@@ -243,4 +243,20 @@ class ResultsJsonTest {
         ResultsJson.write(Fixtures.small(), fresh);
         assertTrue(Files.isRegularFile(fresh));
     }
+
+    /**
+     * No object in the document names a key twice (RFC 8259 leaves such a document's meaning to
+     * the reader), checked by Jackson's own duplicate detection while parsing: the writer names
+     * its keys in code, so a run through every branch (diagnostics, waivers, curves, a baseline
+     * with its changes) covers what any run can write.
+     */
+    @Test
+    void noObjectNamesAKeyTwice(@TempDir Path dir) throws Exception {
+        JsonMapper strict = JsonMapper.builder().enable(tools.jackson.core.StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                .build();
+        for (Results results : List.of(EngineRuns.mixed(dir.resolve("mixed")), EngineRuns.hostile(dir.resolve("hostile")),
+                BaselineReportsTest.judged(dir.resolve("baseline")))) {
+            assertTrue(strict.readTree(ResultsJson.toBytes(results)).get("specs").size() > 0);
+        }
+    }
 }

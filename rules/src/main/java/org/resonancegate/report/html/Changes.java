@@ -76,7 +76,7 @@ final class Changes {
     static Optional<InterferencePlot.Baseline> overlay(Optional<Comparison> c, String currentFile) {
         return c.map(x -> {
             List<Interference.ModeLine> modes = new ArrayList<>();
-            x.specs().stream().filter(s -> s.currentFile().filter(currentFile::equals).isPresent())
+            x.current(currentFile).stream()
                     .flatMap(s -> s.modes().stream())
                     .filter(m -> m.moved() && m.baselineHz().isPresent())
                     .forEach(m -> modes.add(new Interference.ModeLine(m.index(), m.baselineHz().getAsDouble())));
@@ -86,7 +86,6 @@ final class Changes {
 
     /** The spec's change since the baseline, as the overview shows it; empty without a baseline. */
     static String kind(Optional<Comparison> c, String currentFile) {
-        return c.flatMap(x -> x.specs().stream().filter(s -> s.currentFile().filter(currentFile::equals).isPresent())
-                .findFirst()).map(s -> s.kind().key()).orElse("");
+        return c.flatMap(x -> x.current(currentFile).stream().findFirst()).map(s -> s.kind().key()).orElse("");
     }
 }

@@ -3,7 +3,11 @@ package org.resonancegate.report.html;
 import gg.jte.ContentType;
 import gg.jte.TemplateEngine;
 import gg.jte.output.StringOutput;
+import gg.jte.output.WriterOutput;
+import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import org.resonancegate.report.AtomicWrite;
@@ -37,6 +41,12 @@ public final class HtmlReport {
 
     /** Writes the page (UTF-8) to {@code target}, atomically, creating its directory. */
     public static void write(Results results, Path target) throws IOException {
-        AtomicWrite.write(target, render(results).getBytes(StandardCharsets.UTF_8));
+        Page page = Pages.of(results);
+        // streamed as it is rendered: the same characters, encoded as String.getBytes would
+        AtomicWrite.write(target, out -> {
+            Writer w = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), 1 << 14);
+            ENGINE.render("report.jte", page, new WriterOutput(w));
+            w.flush();
+        });
     }
 }

@@ -1,5 +1,6 @@
 package org.resonancegate.report.html;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -44,7 +45,17 @@ public record Page(String heading, String summary, String summaryStatus, String 
 
         /** The file path cut after each '/', so the template can offer a line break there and nowhere else. */
         public List<String> fileParts() {
-            return List.of(file.split("(?<=/)"));
+            // as file.split("(?<=/)") would cut it (no trailing empty part), without a regex per row
+            List<String> parts = new ArrayList<>();
+            int start = 0;
+            for (int slash = file.indexOf('/'); slash >= 0; slash = file.indexOf('/', start)) {
+                parts.add(file.substring(start, slash + 1));
+                start = slash + 1;
+            }
+            if (start < file.length() || parts.isEmpty()) {
+                parts.add(file.substring(start));
+            }
+            return List.copyOf(parts);
         }
     }
 

@@ -91,8 +91,28 @@ public record Svg(int width, int height, String label, List<Clip> clips, List<Re
         }
     }
 
-    /** A pixel coordinate with one decimal, the same on every locale. */
+    /**
+     * A pixel coordinate with one decimal, the same on every locale: the text of
+     * {@code String.format(Locale.ROOT, "%.1f", v)}, with -0.0 shown as 0.0. A plot has thousands of
+     * coordinates and the formatter looks up its locale's symbols on every call, so a value that
+     * is clearly not a tie (its tenths are not within a millionth of ending in 5) is rounded here
+     * by hand; ties, where the formatter's rounding of the shortest decimal form decides, and
+     * values too large for a double's tenths to be exact, still go to the formatter.
+     */
     static String px(double v) {
+        if (Math.abs(v) < 1e6) {
+            double tenths = Math.abs(v) * 10;
+            double whole = Math.floor(tenths);
+            double rest = tenths - whole;
+            if (Math.abs(rest - 0.5) > 1e-6) {
+                long m = (long) whole + (rest > 0.5 ? 1 : 0);
+                StringBuilder text = new StringBuilder(12);
+                if (v < 0) {
+                    text.append('-'); // the formatter keeps the sign of a small negative value: -0.0
+                }
+                return text.append(m / 10).append('.').append((char) ('0' + m % 10)).toString();
+            }
+        }
         return String.format(Locale.ROOT, "%.1f", v == 0 ? 0.0 : v);
     }
 }
