@@ -166,7 +166,7 @@ public abstract class AbstractGateMojo extends AbstractMojo {
     private Optional<List<Path>> separateClasspath(SeparateJvm.Choice choice, GateSettings settings)
             throws GateException, MojoExecutionException {
         if (choice == SeparateJvm.Choice.SAME
-                || (choice == SeparateJvm.Choice.AUTO && GateRun.specFiles(settings).size() < SeparateJvm.FROM_SPEC_FILES)) {
+                || (choice == SeparateJvm.Choice.AUTO && !GateRun.atLeast(settings, SeparateJvm.FROM_SPEC_FILES))) {
             return Optional.empty();
         }
         Optional<List<Path>> classpath = pluginClasspath();

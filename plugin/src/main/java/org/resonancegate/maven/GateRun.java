@@ -78,14 +78,13 @@ final class GateRun {
         // the response curves cost more than the judging itself; only the HTML report draws them
         SpecRun run = findAndRun(settings, scanner, clock, chosen.contains(ReportFormat.HTML));
         Results results = compared.compare(base, clock, run.results(), settings.specs(), scanner);
-        // written before any verdict so a failed build still leaves its record and reports
-        Path reader = writeReports(base, output, results, chosen);
+        // written before any verdict so a failed build still leaves its record and reports; the
+        // console lines go out while the files are written (thousands of lines take a while to log)
+        List<ConsoleLine> lines = ConsoleReport.lines(results, compared.carriedOverPasses());
+        Path reader = writeReports(base, output, results, chosen, () -> lines.forEach(out));
         if (settings.summaryFile().isPresent()) {
             Path target = settings.summaryFile().get();
             summary.append(target, summaryPart(settings, target, results, chosen));
-        }
-        for (ConsoleLine line : ConsoleReport.lines(results, compared.carriedOverPasses())) {
-            out.accept(line);
         }
         String others = chosen.stream().filter(f -> !output.resolve(f.fileName()).equals(reader))
                 .map(ReportFormat::fileName).collect(Collectors.joining(", "));
@@ -100,6 +99,19 @@ final class GateRun {
     static void validate(GateSettings settings) throws GateException {
         chosenFormats(settings.formats());
         BaselineOptions.of(settings.baseline().orElse(null), settings.failOn());
+    }
+
+    /** Whether the settings select at least {@code n} files (false when the spec directory is missing). */
+    static boolean atLeast(GateSettings settings, int n) throws GateException {
+        Path specs = settings.specs();
+        if (!Files.isDirectory(specs)) {
+            return false; // a missing directory or a file: the run itself says so
+        }
+        try {
+            return new SpecFileScanner(settings.includes(), settings.excludes()).atLeast(specs, n);
+        } catch (IOException | java.io.UncheckedIOException e) {
+            throw new GateException("resonance-gate: cannot list the spec files in " + specs + ": " + e, e);
+        }
     }
 
     /** The spec files the settings select, in report order; empty when the spec directory does not exist. */
@@ -163,10 +175,11 @@ final class GateRun {
      * file atomically. A failure names its file as before; when several fail, the first in
      * writing order is reported, after every writer has finished, so no thread is left behind.
      *
+     * @param meanwhile run on this thread while the files are written
      * @return the file a person should open first
      */
-    private static Path writeReports(Path base, Path output, Results results, Set<ReportFormat> chosen)
-            throws GateException {
+    private static Path writeReports(Path base, Path output, Results results, Set<ReportFormat> chosen,
+                                     Runnable meanwhile) throws GateException {
         Optional<String> inRepository = folderInWorkTree(base);
         int threads = Math.max(1, Math.min(chosen.size(), Runtime.getRuntime().availableProcessors()));
         ExecutorService pool = Executors.newFixedThreadPool(threads, REPORT_THREADS);
@@ -175,6 +188,7 @@ final class GateRun {
             for (ReportFormat format : chosen) {
                 running.put(format, pool.submit(() -> format.write(results, output, chosen, inRepository)));
             }
+            meanwhile.run();
             GateException first = null;
             for (Map.Entry<ReportFormat, Future<Path>> writing : running.entrySet()) {
                 try {

@@ -46,6 +46,19 @@ final class SpecFileScanner {
     }
 
     /**
+     * Whether at least {@code n} files below {@code directory} are selected; stops walking at the
+     * {@code n}-th, so a large spec folder is not listed twice just to learn that it is large.
+     */
+    boolean atLeast(Path directory, int n) throws IOException {
+        Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
+        try (Stream<Path> walk = Files.walk(root)) {
+            return walk.filter(Files::isRegularFile)
+                    .filter(file -> selected(relative(directory, directory.resolve(root.relativize(file)))))
+                    .limit(n).count() >= n;
+        }
+    }
+
+    /**
      * The includes, as written, that name a single file (no wildcard) which is not among
      * {@code found}: a mistyped or deleted file name would otherwise leave a spec unchecked
      * without a word, while the other includes still find something.

@@ -50,8 +50,17 @@ public final class CheckRunner {
             Set<String> detailed = DetailedSpecs.files(results);
             Map<String, LoadedSpec> byFile = new HashMap<>();
             loaded.forEach(l -> byFile.put(l.file(), l));
-            results.replaceAll(r -> detailed.contains(r.file()) && byFile.containsKey(r.file())
-                    ? evaluate(byFile.get(r.file()), today, true) : r);
+            List<Integer> again = new ArrayList<>();
+            for (int i = 0; i < results.size(); i++) {
+                if (detailed.contains(results.get(i).file()) && byFile.containsKey(results.get(i).file())) {
+                    again.add(i);
+                }
+            }
+            List<SpecResult> withCurves = (parallel ? again.parallelStream() : again.stream())
+                    .map(i -> evaluate(byFile.get(results.get(i).file()), today, true)).toList();
+            for (int j = 0; j < again.size(); j++) {
+                results.set(again.get(j), withCurves.get(j));
+            }
         }
         return new Results(results);
     }
