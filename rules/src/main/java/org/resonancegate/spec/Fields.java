@@ -3,6 +3,7 @@ package org.resonancegate.spec;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Supplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -31,9 +32,14 @@ final class Fields {
      * @param where what the object is, for the message ("the model", "criterion \"SEP\"")
      */
     static void checkKeys(JsonNode.JsonObject object, String where, List<String> accepted, Problems problems) {
+        checkKeys(object, () -> where, accepted, problems);
+    }
+
+    /** As {@link #checkKeys(JsonNode.JsonObject, String, List, Problems)}, wording {@code where} only for a message. */
+    static void checkKeys(JsonNode.JsonObject object, Supplier<String> where, List<String> accepted, Problems problems) {
         for (JsonNode.Member member : object.members()) {
             if (!accepted.contains(member.key())) {
-                StringBuilder message = new StringBuilder("unknown key \"" + member.key() + "\" in " + where);
+                StringBuilder message = new StringBuilder("unknown key \"" + member.key() + "\" in " + where.get());
                 Optional<String> meant = Suggestions.closest(member.key(), accepted);
                 meant.ifPresent(s -> message.append(" (did you mean \"").append(s).append("\"?)"));
                 message.append("; accepted keys: ").append(String.join(", ", accepted));
@@ -45,10 +51,20 @@ final class Fields {
     /** The value under {@code key}, or a diagnostic at the object saying it is missing. */
     static Optional<JsonNode> required(JsonNode.JsonObject object, String key, String where, String example,
                                        Problems problems) {
+        return required(object, key, () -> where, () -> example, problems);
+    }
+
+    /**
+     * As {@link #required(JsonNode.JsonObject, String, String, String, Problems)}, wording
+     * {@code where} and {@code example} only for a message: the hot paths read every coordinate
+     * and axis of every spec through here.
+     */
+    static Optional<JsonNode> required(JsonNode.JsonObject object, String key, Supplier<String> where,
+                                       Supplier<String> example, Problems problems) {
         Optional<JsonNode> value = object.get(key);
         if (value.isEmpty()) {
-            problems.missingKey(object.location(), key, "missing required key \"" + key + "\" in " + where
-                    + "; add it, for example " + example);
+            problems.missingKey(object.location(), key, "missing required key \"" + key + "\" in " + where.get()
+                    + "; add it, for example " + example.get());
         }
         return value;
     }

@@ -24,7 +24,7 @@ final class Geometry {
             return Optional.empty();
         }
         JsonNode.JsonObject p = object.get();
-        Fields.checkKeys(p, "\"" + key + "\"", XYZ, problems);
+        Fields.checkKeys(p, () -> "\"" + key + "\"", XYZ, problems);
         Optional<Quantity> x = coordinate(p, key, "x", problems);
         Optional<Quantity> y = coordinate(p, key, "y", problems);
         Optional<Quantity> z = coordinate(p, key, "z", problems);
@@ -35,8 +35,8 @@ final class Geometry {
     }
 
     private static Optional<Quantity> coordinate(JsonNode.JsonObject p, String key, String axis, Problems problems) {
-        return Fields.required(p, axis, "\"" + key + "\"", "\"" + axis + "\": \"0 m\" (all three coordinates are needed)",
-                        problems)
+        return Fields.required(p, axis, () -> "\"" + key + "\"",
+                        () -> "\"" + axis + "\": \"0 m\" (all three coordinates are needed)", problems)
                 .flatMap(n -> Fields.quantity(n, axis, Dimension.LENGTH, problems));
     }
 
@@ -47,13 +47,13 @@ final class Geometry {
             return Optional.empty();
         }
         JsonNode.JsonObject d = object.get();
-        Fields.checkKeys(d, "\"" + key + "\"", XYZ, problems);
+        Fields.checkKeys(d, () -> "\"" + key + "\"", XYZ, problems);
         double[] v = new double[3];
         boolean ok = true;
         for (int i = 0; i < 3; i++) {
             String axis = XYZ.get(i);
-            Optional<Double> c = Fields.required(d, axis, "\"" + key + "\"",
-                            "\"" + axis + "\": 0 (a direction takes all three components, plain numbers)", problems)
+            Optional<Double> c = Fields.required(d, axis, () -> "\"" + key + "\"",
+                            () -> "\"" + axis + "\": 0 (a direction takes all three components, plain numbers)", problems)
                     .flatMap(n -> Fields.number(n, axis, "0 or 1 (a direction is a plain vector, no unit)", problems));
             ok &= c.isPresent();
             v[i] = c.orElse(0.0);

@@ -170,13 +170,13 @@ final class RigidBodyReader {
             return Optional.empty();
         }
         JsonNode.JsonObject s = object.get();
-        Fields.checkKeys(s, "the stiffness of " + where, Geometry.XYZ, problems);
+        Fields.checkKeys(s, () -> "the stiffness of " + where, Geometry.XYZ, problems);
         double[] k = new double[3];
         boolean ok = true;
         for (int i = 0; i < 3; i++) {
             String axis = Geometry.XYZ.get(i);
-            Optional<Quantity> q = Fields.required(s, axis, "the stiffness of " + where,
-                            "\"" + axis + "\": \"0.4 MN/m\" (all three axes are needed; \"0 N/m\" where the mount gives none)",
+            Optional<Quantity> q = Fields.required(s, axis, () -> "the stiffness of " + where,
+                            () -> "\"" + axis + "\": \"0.4 MN/m\" (all three axes are needed; \"0 N/m\" where the mount gives none)",
                             problems)
                     .flatMap(n -> Fields.nonNegative(n, axis, Dimension.STIFFNESS, problems));
             ok &= q.isPresent();
