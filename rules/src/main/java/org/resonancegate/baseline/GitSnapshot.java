@@ -4,7 +4,9 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.Predicate;
 import org.eclipse.jgit.errors.MissingObjectException;
@@ -35,6 +37,8 @@ final class GitSnapshot implements SpecFiles, AutoCloseable {
     private final Path base;
     private final Path baseReal;
     private final Path workTreeReal;
+    /** Directory listings read so far, by tree path; guarded by this snapshot's lock. */
+    private final Map<String, Map<String, Entry>> listings = new HashMap<>();
 
     private GitSnapshot(Repository repository, RevCommit commit, Path base) throws IOException {
         this.repository = repository;
@@ -126,7 +130,7 @@ final class GitSnapshot implements SpecFiles, AutoCloseable {
      * The regular files below {@code directory} at this commit whose {@code /}-separated path
      * relative to it is selected, sorted by that path; empty when the directory does not exist there.
      */
-    List<Path> files(Path directory, Predicate<String> selected) throws IOException {
+    synchronized List<Path> files(Path directory, Predicate<String> selected) throws IOException {
         Optional<String> dir = treePath(directory);
         List<Path> out = new ArrayList<>();
         if (dir.isEmpty()) {
@@ -181,13 +185,22 @@ final class GitSnapshot implements SpecFiles, AutoCloseable {
     }
 
     @Override
-    public long size(Path file) throws IOException {
+    public synchronized long size(Path file) throws IOException {
         return reader.getObjectSize(blob(file), Constants.OBJ_BLOB);
     }
 
     @Override
-    public byte[] read(Path file) throws IOException {
+    public synchronized byte[] read(Path file) throws IOException {
         return reader.open(blob(file), Constants.OBJ_BLOB).getBytes();
+    }
+
+    /**
+     * Several threads may read: the object reader, which is not safe for that, is only used under
+     * this snapshot's lock, and fetching a blob is quick next to parsing and judging it.
+     */
+    @Override
+    public boolean concurrent() {
+        return true;
     }
 
     @Override
@@ -206,7 +219,11 @@ final class GitSnapshot implements SpecFiles, AutoCloseable {
     private record Entry(ObjectId id, FileMode mode) {
     }
 
-    private Optional<Entry> entry(Path file) {
+    /**
+     * The entry at {@code file}. Each directory's tree is listed once and kept, so the five or so
+     * lookups per spec file do not each walk the commit's tree from its root again.
+     */
+    private synchronized Optional<Entry> entry(Path file) {
         Optional<String> path = treePath(file);
         if (path.isEmpty()) {
             return Optional.empty();
@@ -214,11 +231,42 @@ final class GitSnapshot implements SpecFiles, AutoCloseable {
         if (path.get().isEmpty()) {
             return Optional.of(new Entry(commit.getTree(), FileMode.TREE));
         }
-        try (TreeWalk walk = TreeWalk.forPath(repository, reader, path.get(), commit.getTree())) {
-            return walk == null ? Optional.empty() : Optional.of(new Entry(walk.getObjectId(0), walk.getFileMode(0)));
-        } catch (IOException e) {
-            return Optional.empty();
+        String p = path.get();
+        int slash = p.lastIndexOf('/');
+        Map<String, Entry> listing = listing(slash < 0 ? "" : p.substring(0, slash));
+        return Optional.ofNullable(listing.get(p.substring(slash + 1)));
+    }
+
+    /** The entries of the directory at {@code dir} ("" for the root) by name; empty when there is no such directory. */
+    private Map<String, Entry> listing(String dir) {
+        Map<String, Entry> known = listings.get(dir);
+        if (known != null) {
+            return known;
         }
+        Map<String, Entry> entries = new HashMap<>();
+        ObjectId tree = null;
+        if (dir.isEmpty()) {
+            tree = commit.getTree();
+        } else {
+            int slash = dir.lastIndexOf('/');
+            Entry self = listing(slash < 0 ? "" : dir.substring(0, slash)).get(dir.substring(slash + 1));
+            if (self != null && self.mode == FileMode.TREE) {
+                tree = self.id;
+            }
+        }
+        if (tree != null) {
+            try (TreeWalk walk = new TreeWalk(repository, reader)) {
+                walk.addTree(tree);
+                walk.setRecursive(false);
+                while (walk.next()) {
+                    entries.put(walk.getNameString(), new Entry(walk.getObjectId(0), walk.getFileMode(0)));
+                }
+            } catch (IOException e) {
+                entries.clear(); // an unreadable tree reads as absent, as a failed lookup did before
+            }
+        }
+        listings.put(dir, entries);
+        return entries;
     }
 
     /** The path inside the repository's tree, {@code /}-separated ("" for the work tree's root); empty outside it. */

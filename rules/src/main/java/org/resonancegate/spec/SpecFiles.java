@@ -31,7 +31,7 @@ public interface SpecFiles {
 
     byte[] read(Path file) throws IOException;
 
-    /** Whether several threads may read at once (the disk may; a Git object reader may not). */
+    /** Whether several threads may read at once (the disk may; a Git snapshot may, as it locks its object reader). */
     default boolean concurrent() {
         return false;
     }
