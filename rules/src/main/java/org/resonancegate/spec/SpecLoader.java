@@ -48,7 +48,10 @@ public final class SpecLoader {
         }
         // Each file is read on its own (profiles are shared through the resolver's concurrent
         // cache); the list keeps the input order whichever thread finishes first.
-        List<Read> reads = (contents.concurrent() ? unique.parallelStream() : unique.stream())
+        // a list splits evenly between threads; a set's iterator hands out ever larger batches,
+        // which can leave one thread reading the last few thousand files alone
+        List<Path> ordered = new ArrayList<>(unique);
+        List<Read> reads = (contents.concurrent() ? ordered.parallelStream() : ordered.stream())
                 .map(file -> readOne(file, paths, resolver)).flatMap(Optional::stream).toList();
         List<LoadedSpec> loaded = markDuplicateIds(reads);
         loaded.sort(Comparator.comparing(LoadedSpec::file));
