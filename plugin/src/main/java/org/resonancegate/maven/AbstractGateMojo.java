@@ -126,7 +126,7 @@ public abstract class AbstractGateMojo extends AbstractMojo {
         Path base = basedir.toPath().toAbsolutePath().normalize();
         GateSettings settings = new GateSettings(base, base.resolve(specDirectory.toPath()).normalize(),
                 base.resolve(outputDirectory.toPath()).normalize(), includeList(), excludeList(),
-                formats == null ? List.of() : formats,
+                nonBlank(formats),
                 Optional.ofNullable(summaryFile).map(f -> base.resolve(f.toPath()).normalize()),
                 Optional.ofNullable(baseline).map(String::trim).filter(b -> !b.isEmpty()),
                 failOn == null ? "" : failOn, artifactId == null ? "" : artifactId);
@@ -200,12 +200,17 @@ public abstract class AbstractGateMojo extends AbstractMojo {
     }
 
     private List<String> includeList() {
-        List<String> list = includes == null ? List.of() : includes.stream().filter(p -> !p.isBlank()).toList();
+        List<String> list = nonBlank(includes);
         return list.isEmpty() ? List.of(DEFAULT_INCLUDE) : list;
     }
 
     private List<String> excludeList() {
-        return excludes == null ? List.of() : excludes.stream().filter(p -> !p.isBlank()).toList();
+        return nonBlank(excludes);
+    }
+
+    /** The entries that say something: {@code -Dresonance-gate.formats=json,} or an empty {@code <exclude/>} leaves blanks (or nulls). */
+    private static List<String> nonBlank(List<String> entries) {
+        return entries == null ? List.of() : entries.stream().filter(e -> e != null && !e.isBlank()).map(String::trim).toList();
     }
 
     private static void print(Log log, ConsoleLine line) {

@@ -99,6 +99,11 @@ final class GateRun {
     static void validate(GateSettings settings) throws GateException {
         chosenFormats(settings.formats());
         BaselineOptions.of(settings.baseline().orElse(null), settings.failOn());
+        if (Files.exists(settings.output()) && !Files.isDirectory(settings.output())) {
+            throw new GateException("resonance-gate: outputDirectory " + display(settings.base(), settings.output())
+                    + " is a file, not a directory; point resonance-gate.outputDirectory at a folder (it is created"
+                    + " when missing), or remove the file");
+        }
     }
 
     /** Whether the settings select at least {@code n} files (false when the spec directory is missing). */
@@ -125,7 +130,10 @@ final class GateRun {
                     + " is a file, not a directory; point resonance-gate.specDirectory at the folder holding the specs");
         }
         try {
-            return new SpecFileScanner(settings.includes(), settings.excludes()).scan(specs);
+            List<Path> files = new SpecFileScanner(settings.includes(), settings.excludes()).scan(specs);
+            // a spec folder that holds the report folder (specDirectory=.) must not read the reports as specs
+            Path output = settings.output();
+            return output.startsWith(specs) ? files.stream().filter(f -> !f.startsWith(output)).toList() : files;
         } catch (IOException | java.io.UncheckedIOException e) {
             throw new GateException("resonance-gate: cannot list the spec files in " + specs + ": " + e, e);
         }

@@ -77,6 +77,7 @@ final class SeparateJvm {
         Path work;
         try {
             Files.createDirectories(settings.output());
+            removeLeftovers(settings.output());
             work = Files.createTempDirectory(settings.output(), "separate-jvm-");
         } catch (IOException e) {
             throw new GateException("resonance-gate: cannot prepare " + settings.output() + " for the separate JVM: " + e, e);
@@ -100,6 +101,12 @@ final class SeparateJvm {
         command.addAll(OPTIONS);
         // the Git reader logs through SLF4J, which Maven's JVM provides; alone, SLF4J would say it found no logger
         command.add("-Dslf4j.internal.verbosity=ERROR");
+        // the day a waiver is judged on, and any locale-dependent wording, as in Maven's JVM
+        // (MAVEN_OPTS or .mvn/jvm.config may set them, and a child does not inherit -D options)
+        command.add("-Duser.timezone=" + java.util.TimeZone.getDefault().getID());
+        java.util.Locale locale = java.util.Locale.getDefault();
+        command.add("-Duser.language=" + locale.getLanguage());
+        command.add("-Duser.country=" + locale.getCountry());
         command.add("-cp");
         command.add(classpath.stream().map(Path::toString).collect(Collectors.joining(java.io.File.pathSeparator)));
         command.add(SeparateJvmMain.class.getName());
@@ -117,7 +124,9 @@ final class SeparateJvm {
                 throw new CannotStart("resonance-gate: cannot start a separate JVM (" + command.get(0) + "): " + e
                         + "; set resonance-gate.jvm=same to check in Maven's own JVM", e);
             }
-            process.getOutputStream().close();
+            // the child's input stays open while this JVM lives: when it closes (this JVM ended,
+            // even by SIGKILL, when no shutdown hook runs) the child stops itself
+            java.io.OutputStream lifeline = process.getOutputStream();
             // a build stopped with Ctrl-C takes its check with it, instead of leaving it to run on
             Thread stop = new Thread(process::destroy, "resonance-gate separate JVM stop");
             Runtime.getRuntime().addShutdownHook(stop);
@@ -139,6 +148,11 @@ final class SeparateJvm {
                     process.destroy(); // whatever stopped the reading, the child does not outlive it
                 }
                 try {
+                    lifeline.close();
+                } catch (IOException e) {
+                    // the child is gone already
+                }
+                try {
                     Runtime.getRuntime().removeShutdownHook(stop);
                 } catch (IllegalStateException shuttingDown) {
                     // the JVM is already stopping; the hook runs and finds the child gone
@@ -151,7 +165,7 @@ final class SeparateJvm {
             Thread.currentThread().interrupt();
             throw new GateException("resonance-gate: interrupted while the separate JVM was checking", e);
         }
-        List<String> stderr = readLines(errors);
+        List<String> stderr = readLines(errors).stream().filter(line -> !pickedUp(line)).toList();
         if (problem.isPresent()) {
             throw new GateException(problem.get());
         }
@@ -171,6 +185,22 @@ final class SeparateJvm {
             }
         }
         return outcome.get();
+    }
+
+    /** Scratch folders of runs that were killed before they could clean up (one run per output folder at a time). */
+    private static void removeLeftovers(Path output) {
+        try (Stream<Path> list = Files.list(output)) {
+            list.filter(p -> p.getFileName().toString().startsWith("separate-jvm-") && Files.isDirectory(p))
+                    .forEach(SeparateJvm::delete);
+        } catch (IOException | UncheckedIOException e) {
+            // leftovers under target/ harm nothing; the next clean removes them
+        }
+    }
+
+    /** The JVM's notes about options it picked up from the environment (Maven's JVM printed them already). */
+    private static boolean pickedUp(String line) {
+        return line.startsWith("Picked up JAVA_TOOL_OPTIONS") || line.startsWith("Picked up _JAVA_OPTIONS")
+                || line.startsWith("Picked up JDK_JAVA_OPTIONS");
     }
 
     private static Optional<String> text(String s) {

@@ -21,6 +21,7 @@ public final class SeparateJvmMain {
     }
 
     public static void main(String[] args) throws IOException {
+        stopWhenMavenIsGone();
         PrintWriter out = new PrintWriter(new BufferedWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8),
                 1 << 16), false);
         SeparateJvmProtocol.Request request = SeparateJvmProtocol.readSettings(Path.of(args[0]));
@@ -38,6 +39,25 @@ public final class SeparateJvmMain {
             out.flush();
             System.exit(3);
         }
+    }
+
+    /**
+     * Maven's JVM holds this JVM's standard input open while it waits for the result; when the
+     * input ends, Maven's JVM is gone (stopped, killed), and so is the reason to go on.
+     */
+    private static void stopWhenMavenIsGone() {
+        Thread watch = new Thread(() -> {
+            try {
+                while (System.in.read() != -1) {
+                    // nothing is sent; reading only waits for the end
+                }
+            } catch (IOException e) {
+                // a broken pipe means the same
+            }
+            Runtime.getRuntime().halt(130);
+        }, "resonance-gate: stop when Maven is gone");
+        watch.setDaemon(true);
+        watch.start();
     }
 
     /** The summary part goes to Maven's JVM, which appends it under the lock its other modules share. */
