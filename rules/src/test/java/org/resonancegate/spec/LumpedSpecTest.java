@@ -285,6 +285,18 @@ class LumpedSpecTest {
         loaded.diagnostics().forEach(d -> assertTrue(d.message().length() < 400, d.message()));
     }
 
+    @Test
+    void moreThanTwoHundredMassesIsADiagnosticBeforeAnythingIsSolved() {
+        StringBuilder masses = new StringBuilder();
+        for (int i = 0; i < 201; i++) {
+            masses.append(i == 0 ? "" : ", ").append("{\"name\": \"m").append(i).append("\", \"mass\": \"1 kg\"}");
+        }
+        edit(TRANSLATION, "[{\"name\": \"frame\", \"mass\": \"400 kg\"}, {\"name\": \"pump\", \"mass\": \"0.9 t\"}]",
+                "[" + masses + "]");
+        expect("[{\"name\": \"m0\"", "\"masses\" lists 201 entries", "at most 200", "lump neighbouring masses");
+        assertTrue(loaded.spec().isEmpty());
+    }
+
     // --- damping ---------------------------------------------------------------------------
 
     @Test
