@@ -20,7 +20,7 @@ final class LumpedReader {
     /**
      * Masses (or inertias) in one lumped line. The line is solved as one dense eigenproblem per
      * spec, whose cost grows with the cube of the count: 1,000 masses took about half a minute
-     * on two cores, 200 take well under one second. A machine on mounts is modelled with a few
+     * on two cores, 200 about 0.7 s in a fresh JVM. A machine on mounts is modelled with a few
      * masses (common practice, no source); a spec with hundreds would hold a CI build hostage.
      */
     static final int MASS_LIMIT = 200;
