@@ -275,7 +275,6 @@ final class JsonTreeReader {
             case VALUE_STRING -> {
                 String s = parser.getString();
                 checkLength(s, location, "string");
-                checkControl(s, location);
                 yield new JsonNode.JsonString(s, location);
             }
             case VALUE_NUMBER_INT, VALUE_NUMBER_FLOAT ->
@@ -291,23 +290,6 @@ final class JsonTreeReader {
         if (depth > MAX_DEPTH) {
             throw new Abort(location, "nesting deeper than " + MAX_DEPTH
                     + " levels (the top-level object is level 1); a spec never needs that many, flatten it");
-        }
-    }
-
-    /**
-     * JSON lets a string carry any control character as an escape ({@code \\u0007}); no spec text
-     * needs one, and a bell, an escape sequence or a NUL would travel into logs and reports. Line
-     * breaks and tabs are allowed (a waiver's reason may run over lines).
-     */
-    private void checkControl(String s, SourceLocation location) {
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            if ((c < 0x20 && c != '\n' && c != '\r' && c != '\t') || c == 0x7F) {
-                diagnostics.add(new Diagnostic(location, "a string holds the control character U+"
-                        + String.format(java.util.Locale.ROOT, "%04X", (int) c) + " (written \\u"
-                        + String.format(java.util.Locale.ROOT, "%04x", (int) c) + " in the file); remove it"));
-                return;
-            }
         }
     }
 
