@@ -112,11 +112,7 @@ final class GateRun {
         if (!Files.isDirectory(specs)) {
             return false; // a missing directory or a file: the run itself says so
         }
-        try {
-            return new SpecFileScanner(settings.includes(), settings.excludes()).atLeast(specs, n);
-        } catch (IOException | java.io.UncheckedIOException e) {
-            throw new GateException("resonance-gate: cannot list the spec files in " + specs + ": " + e, e);
-        }
+        return listed(settings, scanner -> scanner.atLeast(specs, n));
     }
 
     /** The spec files the settings select, in report order; empty when the spec directory does not exist. */
@@ -129,13 +125,23 @@ final class GateRun {
             throw new GateException("resonance-gate: specDirectory " + display(settings.base(), specs)
                     + " is a file, not a directory; point resonance-gate.specDirectory at the folder holding the specs");
         }
+        List<Path> files = listed(settings, scanner -> scanner.scan(specs));
+        // a spec folder that holds the report folder (specDirectory=.) must not read the reports as specs
+        Path output = settings.output();
+        return output.startsWith(specs) ? files.stream().filter(f -> !f.startsWith(output)).toList() : files;
+    }
+
+    /** One way of listing the spec directory with the settings' patterns. */
+    @FunctionalInterface
+    private interface Listing<T> {
+        T list(SpecFileScanner scanner) throws IOException;
+    }
+
+    private static <T> T listed(GateSettings settings, Listing<T> listing) throws GateException {
         try {
-            List<Path> files = new SpecFileScanner(settings.includes(), settings.excludes()).scan(specs);
-            // a spec folder that holds the report folder (specDirectory=.) must not read the reports as specs
-            Path output = settings.output();
-            return output.startsWith(specs) ? files.stream().filter(f -> !f.startsWith(output)).toList() : files;
+            return listing.list(new SpecFileScanner(settings.includes(), settings.excludes()));
         } catch (IOException | java.io.UncheckedIOException e) {
-            throw new GateException("resonance-gate: cannot list the spec files in " + specs + ": " + e, e);
+            throw new GateException("resonance-gate: cannot list the spec files in " + settings.specs() + ": " + e, e);
         }
     }
 

@@ -137,7 +137,7 @@ final class SeparateJvm {
                     switch (f.get(0)) {
                         case SeparateJvmProtocol.LINE -> out.accept(new ConsoleLine(ConsoleLevel.valueOf(f.get(1)), f.get(2)));
                         case SeparateJvmProtocol.VERDICT -> outcome = Optional.of(new GateRun.Outcome(
-                                new Verdict(text(f.get(1)), text(f.get(2)), text(f.get(3))), f.get(4)));
+                                new Verdict(Verdict.text(f.get(1)), Verdict.text(f.get(2)), Verdict.text(f.get(3))), f.get(4)));
                         case SeparateJvmProtocol.PROBLEM -> problem = Optional.of(f.get(1));
                         default -> out.accept(new ConsoleLine(ConsoleLevel.INFO, line));
                     }
@@ -201,10 +201,6 @@ final class SeparateJvm {
     private static boolean pickedUp(String line) {
         return line.startsWith("Picked up JAVA_TOOL_OPTIONS") || line.startsWith("Picked up _JAVA_OPTIONS")
                 || line.startsWith("Picked up JDK_JAVA_OPTIONS");
-    }
-
-    private static Optional<String> text(String s) {
-        return s.isEmpty() ? Optional.empty() : Optional.of(s);
     }
 
     private static List<String> readLines(Path file) {

@@ -29,18 +29,15 @@ final class SpecFileScanner {
      *         is itself a symbolic link is walked at its target, but reported under its own name)
      */
     List<Path> scan(Path directory) throws IOException {
-        Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
-        try (Stream<Path> walk = Files.walk(root)) {
+        try (Stream<Path> files = regularFiles(directory)) {
             // each file's relative name is worked out once, not again in every comparison of the sort
             Map<String, Path> byName = new TreeMap<>();
-            walk.filter(Files::isRegularFile)
-                    .map(file -> directory.resolve(root.relativize(file)))
-                    .forEach(file -> {
-                        String name = relative(directory, file);
-                        if (selected(name)) {
-                            byName.put(name, file);
-                        }
-                    });
+            files.forEach(file -> {
+                String name = relative(directory, file);
+                if (selected(name)) {
+                    byName.put(name, file);
+                }
+            });
             return List.copyOf(byName.values());
         }
     }
@@ -50,12 +47,18 @@ final class SpecFileScanner {
      * {@code n}-th, so a large spec folder is not listed twice just to learn that it is large.
      */
     boolean atLeast(Path directory, int n) throws IOException {
-        Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
-        try (Stream<Path> walk = Files.walk(root)) {
-            return walk.filter(Files::isRegularFile)
-                    .filter(file -> selected(relative(directory, directory.resolve(root.relativize(file)))))
-                    .limit(n).count() >= n;
+        try (Stream<Path> files = regularFiles(directory)) {
+            return files.filter(file -> selected(relative(directory, file))).limit(n).count() >= n;
         }
+    }
+
+    /**
+     * The regular files below {@code directory}, lazily, as paths below it as given (a spec
+     * directory that is itself a symbolic link is walked at its target); the caller closes the stream.
+     */
+    private static Stream<Path> regularFiles(Path directory) throws IOException {
+        Path root = Files.isSymbolicLink(directory) ? directory.toRealPath() : directory;
+        return Files.walk(root).filter(Files::isRegularFile).map(file -> directory.resolve(root.relativize(file)));
     }
 
     /**

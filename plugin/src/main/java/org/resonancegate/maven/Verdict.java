@@ -22,7 +22,8 @@ record Verdict(Optional<String> nothingChecked, Optional<String> violations, Opt
         return new Verdict(text(nothing), text(judged.failure()), text(judged.note()));
     }
 
-    private static Optional<String> text(String s) {
+    /** {@code ""} means none. */
+    static Optional<String> text(String s) {
         return s.isEmpty() ? Optional.empty() : Optional.of(s);
     }
 }

@@ -1,9 +1,9 @@
 package org.resonancegate.report;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.resonancegate.units.Decimal;
 
 /**
  * How every report words a baseline comparison: frequencies, values, margins and relative changes
@@ -46,10 +46,7 @@ public final class ChangeWords {
 
     /** Four significant digits, no exponent, no trailing zeros. */
     public static String sig(double x) {
-        if (x == 0 || !Double.isFinite(x)) {
-            return x == 0 ? "0" : Double.toString(x);
-        }
-        return new BigDecimal(x).round(new MathContext(4)).stripTrailingZeros().toPlainString();
+        return Decimal.text(x, 4, RoundingMode.HALF_UP);
     }
 
     /** The value before, as written (a JSON literal), cut around the difference when long; "(absent)" if new. */
